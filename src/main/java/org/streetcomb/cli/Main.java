@@ -1,0 +1,66 @@
+package org.streetcomb.cli;
+
+import java.io.PrintWriter;
+import org.streetcomb.ExitCode;
+import org.streetcomb.InputError;
+import org.streetcomb.NoTourError;
+import picocli.CommandLine;
+import picocli.CommandLine.Command;
+
+/** The {@code streetcomb} command: parses the command line and maps errors to exit codes. */
+@Command(name = "streetcomb",
+        mixinStandardHelpOptions = true,
+        versionProvider = Main.Version.class,
+        description = "Plans the shortest tours that cover every street of a road network.",
+        subcommands = {PlanCommand.class, CommandLine.HelpCommand.class},
+        exitCodeListHeading = "%nExit codes:%n",
+        exitCodeList = {
+            "0:success",
+            "1:internal error (a bug: please report it with the stack trace)",
+            "2:the command line is wrong",
+            "3:an input file or option value is bad",
+            "4:no tour can be planned on this input"})
+public final class Main implements Runnable {
+
+    @CommandLine.Spec
+    private CommandLine.Model.CommandSpec spec;
+
+    public static void main(String[] args) {
+        System.exit(run(args, new PrintWriter(System.out, true), new PrintWriter(System.err, true)));
+    }
+
+    /** Runs the command line with the given streams and returns the exit code. */
+    public static int run(String[] args, PrintWriter out, PrintWriter err) {
+        CommandLine cli = new CommandLine(new Main());
+        cli.setOut(out);
+        cli.setErr(err);
+        cli.setExecutionExceptionHandler((e, commandLine, parseResult) -> {
+            if (e instanceof InputError) {
+                err.println("streetcomb: " + e.getMessage());
+                return ExitCode.BAD_INPUT;
+            }
+            if (e instanceof NoTourError) {
+                err.println("streetcomb: no tour: " + e.getMessage());
+                return ExitCode.NO_TOUR;
+            }
+            err.println("streetcomb: internal error, please report it with what follows:");
+            e.printStackTrace(err);
+            return ExitCode.INTERNAL;
+        });
+        return cli.execute(args);
+    }
+
+    @Override
+    public void run() {
+        throw new CommandLine.ParameterException(spec.commandLine(), "a command is required, e.g. streetcomb plan");
+    }
+
+    /** The version from the jar manifest, or "development" when run from classes. */
+    static final class Version implements CommandLine.IVersionProvider {
+        @Override
+        public String[] getVersion() {
+            String version = Main.class.getPackage().getImplementationVersion();
+            return new String[] {"streetcomb " + (version == null ? "development" : version)};
+        }
+    }
+}

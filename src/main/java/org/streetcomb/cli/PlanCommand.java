@@ -1,0 +1,85 @@
+package org.streetcomb.cli;
+
+import java.io.PrintWriter;
+import java.nio.file.Path;
+import java.util.concurrent.Callable;
+import org.streetcomb.ExitCode;
+import org.streetcomb.network.LonLat;
+import org.streetcomb.plan.Plan;
+import org.streetcomb.plan.PlanRequest;
+import org.streetcomb.plan.Planner;
+import org.streetcomb.plan.StageClock;
+import org.streetcomb.write.TourGeoJsonWriter;
+import picocli.CommandLine;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
+
+/** {@code streetcomb plan}: the shortest closed tour over every street of a layer. */
+@Command(name = "plan",
+        mixinStandardHelpOptions = true,
+        sortOptions = false,
+        description = {
+            "Plans the shortest closed tour from the depot that drives every street of the layer at least once. "
+                + "Prints a summary; writes the tour as GeoJSON with --out.",
+            "",
+            "Plans are advice: obey traffic law and signs, never handle a device while driving, and check the "
+                + "route against local rules and your own risk assessment; map data may be out of date."})
+public final class PlanCommand implements Callable<Integer> {
+
+    @Parameters(index = "0", paramLabel = "LAYER", description = "Road centrelines: GeoJSON (.geojson, .json).")
+    Path input;
+
+    @Option(names = "--depot", paramLabel = "LON,LAT", converter = LonLatConverter.class,
+            description = "Where tours start and end, as longitude,latitude in degrees (WGS84). "
+                    + "Default: the first point of the first road line in the layer.")
+    LonLat depot;
+
+    @Option(names = {"-o", "--out"}, paramLabel = "FILE", description = "Write the tours as a GeoJSON FeatureCollection.")
+    Path out;
+
+    @Option(names = "--steps", description = "Also write one GeoJSON feature per step of each tour.")
+    boolean steps;
+
+    @Option(names = "--snap", paramLabel = "METRES", defaultValue = "0.5",
+            description = "Join line ends and vertices closer than this (default: ${DEFAULT-VALUE} m).")
+    double snap;
+
+    @Option(names = "--depot-reach", paramLabel = "METRES", defaultValue = "500",
+            description = "Refuse a depot farther than this from the nearest street node (default: ${DEFAULT-VALUE} m).")
+    double depotReach;
+
+    @Option(names = "--depot-part-only",
+            description = "When the network falls apart into separate parts, plan only the part that holds the depot. "
+                    + "Default: one tour per part.")
+    boolean depotOnly;
+
+    @Option(names = "--json", description = "Print the summary as JSON instead of text.")
+    boolean json;
+
+    @Option(names = {"-q", "--quiet"}, description = "No progress messages on stderr.")
+    boolean quiet;
+
+    @CommandLine.Spec
+    CommandLine.Model.CommandSpec spec;
+
+    @Override
+    public Integer call() {
+        if (!(snap > 0) || snap > 100) {
+            throw new CommandLine.ParameterException(spec.commandLine(), "--snap must be above 0 and at most 100 metres");
+        }
+        if (!(depotReach >= 0)) {
+            throw new CommandLine.ParameterException(spec.commandLine(), "--depot-reach must be 0 or more metres");
+        }
+        PrintWriter stdout = spec.commandLine().getOut();
+        StageClock clock = new StageClock(TerminalProgress.forCommandLine(quiet, System.err));
+        Plan plan = Planner.plan(new PlanRequest(input, depot, snap, depotReach, depotOnly), clock);
+        if (out != null) {
+            clock.run("write", () -> new TourGeoJsonWriter(steps).write(out, plan.network(), plan.tours()));
+        }
+        PlanSummary summary = PlanSummary.of(plan, clock.stages(), out);
+        stdout.print(json ? summary.toJson() : summary.toText());
+        stdout.flush();
+        return ExitCode.OK;
+    }
+}

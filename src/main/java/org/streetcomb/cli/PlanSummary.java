@@ -1,0 +1,161 @@
+package org.streetcomb.cli;
+
+import com.fasterxml.jackson.core.JsonProcessingException;
+import com.fasterxml.jackson.databind.ObjectMapper;
+import com.fasterxml.jackson.databind.SerializationFeature;
+import com.fasterxml.jackson.databind.node.ArrayNode;
+import com.fasterxml.jackson.databind.node.ObjectNode;
+import java.math.BigDecimal;
+import java.math.RoundingMode;
+import java.nio.file.Path;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import org.streetcomb.network.StreetNetwork;
+import org.streetcomb.plan.Plan;
+import org.streetcomb.plan.StageClock;
+import org.streetcomb.tour.Tour;
+
+/**
+ * The summary of a plan, built once and printed as text or as JSON, so both carry the same numbers.
+ * Lengths are metres in JSON (3 decimals) and kilometres in text.
+ */
+final class PlanSummary {
+
+    private static final ObjectMapper MAPPER = new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT);
+    static final String CAUTION = "Plans are advice: obey traffic law and signs, never handle a device while driving, "
+            + "follow local rules and your own risk assessment; map data may be out of date.";
+
+    private final ObjectNode json = MAPPER.createObjectNode();
+    private final StringBuilder text = new StringBuilder();
+
+    private PlanSummary() {
+    }
+
+    static PlanSummary of(Plan plan, List<StageClock.Stage> stages, Path out) {
+        PlanSummary s = new PlanSummary();
+        StreetNetwork network = plan.network();
+        ObjectNode input = s.json.putObject("input");
+        input.put("file", plan.request().input().toString());
+        input.put("features", plan.read().featuresRead());
+        input.put("lines", plan.read().linesKept());
+        ObjectNode skipped = input.putObject("skipped");
+        plan.read().skippedByType().forEach(skipped::put);
+
+        ObjectNode net = s.json.putObject("network");
+        net.put("edges", network.edgeCount());
+        net.put("nodes", network.nodeCount());
+        net.put("odd_nodes", plan.augmentation().oddNodes());
+        net.put("parts", plan.components().count());
+        net.put("length_m", metres(network.totalLength()));
+
+        ObjectNode depot = s.json.putObject("depot");
+        depot.put("node", plan.depot());
+        depot.put("lon", network.lon(plan.depot()));
+        depot.put("lat", network.lat(plan.depot()));
+        depot.put("distance_m", metres(plan.depotDistance()));
+        depot.put("given", plan.request().depot() != null);
+
+        s.json.put("method", plan.augmentation().method());
+        s.json.put("optimal", plan.augmentation().certified());
+        ObjectNode totals = s.json.putObject("totals");
+        double tour = plan.tourLength();
+        double deadhead = plan.deadheadLength();
+        totals.put("tour_m", metres(tour));
+        totals.put("service_m", metres(plan.serviceLength()));
+        totals.put("deadhead_m", metres(deadhead));
+        totals.put("deadhead_share", share(deadhead, tour));
+        ArrayNode tours = s.json.putArray("tours");
+        for (int t = 0; t < plan.tours().size(); t++) {
+            Tour tr = plan.tours().get(t);
+            ObjectNode node = tours.addObject();
+            node.put("tour", t + 1);
+            node.put("start_node", tr.start());
+            node.put("steps", tr.steps());
+            node.put("length_m", metres(tr.length(network)));
+            node.put("deadhead_m", metres(tr.deadhead(network)));
+        }
+        ObjectNode time = s.json.putObject("seconds");
+        for (StageClock.Stage stage : stages) {
+            time.put(stage.name(), BigDecimal.valueOf(stage.seconds()).setScale(3, RoundingMode.HALF_EVEN));
+        }
+        s.json.putPOJO("warnings", plan.warnings());
+        if (out != null) {
+            s.json.put("output", out.toString());
+        }
+        s.json.put("caution", CAUTION);
+        s.buildText(plan, stages, out);
+        return s;
+    }
+
+    private void buildText(Plan plan, List<StageClock.Stage> stages, Path out) {
+        StreetNetwork network = plan.network();
+        line("Layer", "%s: %d features, %d road lines%s", plan.request().input(), plan.read().featuresRead(),
+                plan.read().linesKept(), skippedText(plan.read().skippedByType()));
+        line("Network", "%.3f km in %d edges, %d nodes (%d odd), %d part%s", network.totalLength() / 1000,
+                network.edgeCount(), network.nodeCount(), plan.augmentation().oddNodes(), plan.components().count(),
+                plan.components().count() == 1 ? "" : "s");
+        line("Depot", "node %d at %.7f,%.7f%s", plan.depot(), network.lon(plan.depot()), network.lat(plan.depot()),
+                plan.request().depot() == null ? " (default: first point of the layer)"
+                        : String.format(Locale.ROOT, ", %.1f m from the given position", plan.depotDistance()));
+        line("Method", "%s%s", plan.augmentation().method(), plan.augmentation().certified() ? "" : " [optimality not proved]");
+        double tour = plan.tourLength();
+        double deadhead = plan.deadheadLength();
+        line("Tour", "%.3f km: service %.3f km, deadhead %.3f km (%.1f %%)", tour / 1000, plan.serviceLength() / 1000,
+                deadhead / 1000, tour == 0 ? 0 : 100 * deadhead / tour);
+        if (plan.tours().size() > 1) {
+            for (int t = 0; t < plan.tours().size(); t++) {
+                Tour tr = plan.tours().get(t);
+                line("  tour " + (t + 1), "%.3f km, deadhead %.3f km, %d steps, from node %d", tr.length(network) / 1000,
+                        tr.deadhead(network) / 1000, tr.steps(), tr.start());
+            }
+        } else {
+            line("Steps", "%d", plan.tours().get(0).steps());
+        }
+        StringBuilder times = new StringBuilder();
+        for (StageClock.Stage stage : stages) {
+            times.append(times.length() == 0 ? "" : ", ").append(String.format(Locale.ROOT, "%s %.2f s", stage.name(), stage.seconds()));
+        }
+        line("Time", "%s", times);
+        for (String warning : plan.warnings()) {
+            line("Warning", "%s", warning);
+        }
+        if (out != null) {
+            line("Written", "%s", out);
+        }
+        line("Caution", "%s", CAUTION);
+    }
+
+    private static String skippedText(Map<String, Integer> skipped) {
+        if (skipped.isEmpty()) {
+            return "";
+        }
+        StringBuilder b = new StringBuilder(", skipped ");
+        skipped.forEach((type, n) -> b.append(b.length() > 10 ? ", " : "").append(n).append(' ').append(type));
+        return b.toString();
+    }
+
+    private void line(String label, String format, Object... args) {
+        text.append(String.format(Locale.ROOT, "%-9s %s%n", label, String.format(Locale.ROOT, format, args)));
+    }
+
+    private static BigDecimal metres(double value) {
+        return BigDecimal.valueOf(value).setScale(3, RoundingMode.HALF_EVEN);
+    }
+
+    private static BigDecimal share(double part, double whole) {
+        return BigDecimal.valueOf(whole == 0 ? 0 : part / whole).setScale(6, RoundingMode.HALF_EVEN);
+    }
+
+    String toText() {
+        return text.toString();
+    }
+
+    String toJson() {
+        try {
+            return MAPPER.writeValueAsString(json) + System.lineSeparator();
+        } catch (JsonProcessingException e) {
+            throw new IllegalStateException(e);
+        }
+    }
+}

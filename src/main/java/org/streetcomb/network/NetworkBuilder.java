@@ -1,0 +1,129 @@
+package org.streetcomb.network;
+
+import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.Collection;
+import java.util.HashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.stream.IntStream;
+import org.locationtech.jts.geom.Coordinate;
+import org.locationtech.jts.geom.LineString;
+import org.locationtech.jts.noding.NodedSegmentString;
+import org.locationtech.jts.noding.SegmentString;
+import org.locationtech.jts.noding.snap.SnappingNoder;
+import org.streetcomb.read.RoadFeature;
+
+/**
+ * Turns road lines into a planar {@link StreetNetwork}: every crossing and every touch becomes a node,
+ * vertices and endpoints closer than the snap tolerance are joined, and zero-length pieces are dropped.
+ *
+ * <p>Noding is JTS's {@link SnappingNoder}, run in a {@link LocalFrame} so the tolerance is in metres.
+ * It snaps vertices to vertices and to segments within the tolerance and splits lines only at true
+ * nodes, so output edges are as long as the arrangement allows. Each piece keeps the direction of its
+ * source line and the index of its feature; its length is then measured on the ellipsoid
+ * ({@link GeodesicLength}), in parallel since that dominates the cost of this stage.
+ */
+public final class NetworkBuilder {
+
+    private final double snapTolerance;
+
+    /** @param snapToleranceMetres distance below which vertices are joined; must be positive */
+    public NetworkBuilder(double snapToleranceMetres) {
+        if (!(snapToleranceMetres > 0) || !Double.isFinite(snapToleranceMetres)) {
+            throw new IllegalArgumentException("snap tolerance must be a positive number of metres");
+        }
+        this.snapTolerance = snapToleranceMetres;
+    }
+
+    public StreetNetwork build(List<RoadFeature> features) {
+        LocalFrame frame = frameFor(features);
+        List<SegmentString> input = new ArrayList<>(features.size());
+        for (int f = 0; f < features.size(); f++) {
+            LineString line = features.get(f).line();
+            Coordinate[] projected = new Coordinate[line.getNumPoints()];
+            for (int i = 0; i < projected.length; i++) {
+                Coordinate c = line.getCoordinateN(i);
+                projected[i] = new Coordinate(frame.x(c.x), frame.y(c.y));
+            }
+            input.add(new NodedSegmentString(projected, f));
+        }
+        SnappingNoder noder = new SnappingNoder(snapTolerance);
+        noder.computeNodes(input);
+        @SuppressWarnings("unchecked")
+        Collection<SegmentString> pieces = noder.getNodedSubstrings();
+        return assemble(pieces, frame, features);
+    }
+
+    private static LocalFrame frameFor(List<RoadFeature> features) {
+        double minLon = Double.POSITIVE_INFINITY, maxLon = Double.NEGATIVE_INFINITY;
+        double minLat = Double.POSITIVE_INFINITY, maxLat = Double.NEGATIVE_INFINITY;
+        for (RoadFeature f : features) {
+            var env = f.line().getEnvelopeInternal();
+            minLon = Math.min(minLon, env.getMinX());
+            maxLon = Math.max(maxLon, env.getMaxX());
+            minLat = Math.min(minLat, env.getMinY());
+            maxLat = Math.max(maxLat, env.getMaxY());
+        }
+        return LocalFrame.around((minLon + maxLon) / 2, (minLat + maxLat) / 2);
+    }
+
+    private static StreetNetwork assemble(Collection<SegmentString> pieces, LocalFrame frame, List<RoadFeature> features) {
+        Map<Coordinate, Integer> nodeIds = new HashMap<>();
+        List<Coordinate> nodes = new ArrayList<>();
+        int[] from = new int[pieces.size()];
+        int[] to = new int[pieces.size()];
+        int[] feature = new int[pieces.size()];
+        int[] pointStart = new int[pieces.size() + 1];
+        double[] points = new double[16];
+        int edges = 0;
+        int pointCount = 0;
+        for (SegmentString piece : pieces) {
+            Coordinate[] coords = withoutRepeats(piece.getCoordinates());
+            if (coords.length < 2) {
+                continue;
+            }
+            from[edges] = nodeIds.computeIfAbsent(coords[0], c -> addNode(nodes, c));
+            to[edges] = nodeIds.computeIfAbsent(coords[coords.length - 1], c -> addNode(nodes, c));
+            feature[edges] = (Integer) piece.getData();
+            if (points.length < 2 * (pointCount + coords.length)) {
+                points = Arrays.copyOf(points, Math.max(2 * points.length, 2 * (pointCount + coords.length)));
+            }
+            for (Coordinate c : coords) {
+                points[2 * pointCount] = frame.lon(c.x);
+                points[2 * pointCount + 1] = frame.lat(c.y);
+                pointCount++;
+            }
+            pointStart[++edges] = pointCount;
+        }
+        double[] nodeLon = new double[nodes.size()];
+        double[] nodeLat = new double[nodes.size()];
+        for (int v = 0; v < nodes.size(); v++) {
+            nodeLon[v] = frame.lon(nodes.get(v).x);
+            nodeLat[v] = frame.lat(nodes.get(v).y);
+        }
+        final double[] packed = points;
+        final int[] starts = pointStart;
+        double[] length = IntStream.range(0, edges).parallel()
+                .mapToDouble(e -> GeodesicLength.ofPolyline(packed, starts[e], starts[e + 1] - starts[e]))
+                .toArray();
+        return new StreetNetwork(nodeLon, nodeLat, Arrays.copyOf(from, edges), Arrays.copyOf(to, edges),
+                length, Arrays.copyOf(feature, edges), Arrays.copyOf(pointStart, edges + 1),
+                Arrays.copyOf(points, 2 * pointCount), features);
+    }
+
+    private static int addNode(List<Coordinate> nodes, Coordinate c) {
+        nodes.add(c);
+        return nodes.size() - 1;
+    }
+
+    private static Coordinate[] withoutRepeats(Coordinate[] coords) {
+        List<Coordinate> kept = new ArrayList<>(coords.length);
+        for (Coordinate c : coords) {
+            if (kept.isEmpty() || !kept.get(kept.size() - 1).equals2D(c)) {
+                kept.add(c);
+            }
+        }
+        return kept.toArray(new Coordinate[0]);
+    }
+}

@@ -1,0 +1,156 @@
+package org.streetcomb.network;
+
+import java.util.List;
+import org.streetcomb.read.RoadFeature;
+import org.streetcomb.read.Travel;
+
+/**
+ * A planar, routable street network held in primitive arrays indexed by int ids, so a million edges take
+ * a few hundred megabytes rather than gigabytes of boxed graph objects.
+ *
+ * <p>Nodes have ids 0..nodeCount-1 and WGS84 positions. Edges have ids 0..edgeCount-1; edge {@code e} runs
+ * from {@link #from} to {@link #to} in the direction its source line was digitised, has a geodesic length
+ * in metres, permitted directions of travel, a required flag, the index of its source feature, and its own
+ * polyline (longitude/latitude pairs, packed). Incident edges of each node are kept in compressed
+ * adjacency arrays. Instances are immutable; build them with {@link NetworkBuilder}.
+ */
+public final class StreetNetwork {
+
+    private final double[] nodeLon;
+    private final double[] nodeLat;
+    private final int[] edgeFrom;
+    private final int[] edgeTo;
+    private final double[] edgeLength;
+    private final int[] edgeFeature;
+    private final byte[] edgeTravel;
+    private final boolean[] edgeRequired;
+    private final int[] pointStart;
+    private final double[] points;
+    private final List<RoadFeature> features;
+    private final int[] adjacencyStart;
+    private final int[] adjacentEdges;
+
+    StreetNetwork(double[] nodeLon, double[] nodeLat, int[] edgeFrom, int[] edgeTo, double[] edgeLength,
+                  int[] edgeFeature, int[] pointStart, double[] points, List<RoadFeature> features) {
+        this.nodeLon = nodeLon;
+        this.nodeLat = nodeLat;
+        this.edgeFrom = edgeFrom;
+        this.edgeTo = edgeTo;
+        this.edgeLength = edgeLength;
+        this.edgeFeature = edgeFeature;
+        this.pointStart = pointStart;
+        this.points = points;
+        this.features = List.copyOf(features);
+        int m = edgeFrom.length;
+        this.edgeTravel = new byte[m];
+        this.edgeRequired = new boolean[m];
+        for (int e = 0; e < m; e++) {
+            RoadFeature f = features.get(edgeFeature[e]);
+            edgeTravel[e] = (byte) f.travel().ordinal();
+            edgeRequired[e] = f.required();
+        }
+        this.adjacencyStart = new int[nodeLon.length + 1];
+        for (int e = 0; e < m; e++) {
+            adjacencyStart[edgeFrom[e] + 1]++;
+            adjacencyStart[edgeTo[e] + 1]++;
+        }
+        for (int v = 0; v < nodeLon.length; v++) {
+            adjacencyStart[v + 1] += adjacencyStart[v];
+        }
+        this.adjacentEdges = new int[2 * m];
+        int[] fill = adjacencyStart.clone();
+        for (int e = 0; e < m; e++) {
+            adjacentEdges[fill[edgeFrom[e]]++] = e;
+            adjacentEdges[fill[edgeTo[e]]++] = e;
+        }
+    }
+
+    public int nodeCount() {
+        return nodeLon.length;
+    }
+
+    public int edgeCount() {
+        return edgeFrom.length;
+    }
+
+    public double lon(int node) {
+        return nodeLon[node];
+    }
+
+    public double lat(int node) {
+        return nodeLat[node];
+    }
+
+    public int from(int edge) {
+        return edgeFrom[edge];
+    }
+
+    public int to(int edge) {
+        return edgeTo[edge];
+    }
+
+    /** The end of {@code edge} that is not {@code node} (the same node for a loop). */
+    public int other(int edge, int node) {
+        return edgeFrom[edge] == node ? edgeTo[edge] : edgeFrom[edge];
+    }
+
+    /** Geodesic length in metres on the WGS84 ellipsoid. */
+    public double length(int edge) {
+        return edgeLength[edge];
+    }
+
+    public Travel travel(int edge) {
+        return Travel.values()[edgeTravel[edge]];
+    }
+
+    public boolean required(int edge) {
+        return edgeRequired[edge];
+    }
+
+    public RoadFeature feature(int edge) {
+        return features.get(edgeFeature[edge]);
+    }
+
+    public List<RoadFeature> features() {
+        return features;
+    }
+
+    /** Number of edge ends at {@code node}: a loop counts twice. */
+    public int degree(int node) {
+        return adjacencyStart[node + 1] - adjacencyStart[node];
+    }
+
+    /** Incident edges of {@code node} are {@code incidentEdge(i)} for i in [incidenceStart, incidenceEnd). */
+    public int incidenceStart(int node) {
+        return adjacencyStart[node];
+    }
+
+    public int incidenceEnd(int node) {
+        return adjacencyStart[node + 1];
+    }
+
+    public int incidentEdge(int i) {
+        return adjacentEdges[i];
+    }
+
+    public int pointCount(int edge) {
+        return pointStart[edge + 1] - pointStart[edge];
+    }
+
+    /** Longitude of point {@code i} of the edge's polyline, in digitised order. */
+    public double pointLon(int edge, int i) {
+        return points[2 * (pointStart[edge] + i)];
+    }
+
+    public double pointLat(int edge, int i) {
+        return points[2 * (pointStart[edge] + i) + 1];
+    }
+
+    public double totalLength() {
+        double sum = 0;
+        for (double l : edgeLength) {
+            sum += l;
+        }
+        return sum;
+    }
+}

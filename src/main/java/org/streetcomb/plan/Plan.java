@@ -1,0 +1,38 @@
+package org.streetcomb.plan;
+
+import java.util.List;
+import org.streetcomb.network.Components;
+import org.streetcomb.network.StreetNetwork;
+import org.streetcomb.read.ReadReport;
+import org.streetcomb.solve.Augmentation;
+import org.streetcomb.tour.Tour;
+
+/**
+ * A planned set of tours and everything the summary reports about how they were made.
+ *
+ * @param request       what was asked
+ * @param read          the reader's account of the layer
+ * @param network       the noded network
+ * @param components    its connected components
+ * @param depot         the depot node
+ * @param depotDistance metres from the requested depot position to the depot node (0 for the default)
+ * @param augmentation  the deadhead the solver added
+ * @param tours         the tours, depot's component first
+ * @param warnings      things the user should know about this plan, one line each
+ */
+public record Plan(PlanRequest request, ReadReport read, StreetNetwork network, Components components, int depot,
+                   double depotDistance, Augmentation augmentation, List<Tour> tours, List<String> warnings) {
+
+    /** Total length of the streets the tours cover, metres. */
+    public double serviceLength() {
+        return tours.stream().mapToDouble(t -> t.length(network) - t.deadhead(network)).sum();
+    }
+
+    public double tourLength() {
+        return tours.stream().mapToDouble(t -> t.length(network)).sum();
+    }
+
+    public double deadheadLength() {
+        return tours.stream().mapToDouble(t -> t.deadhead(network)).sum();
+    }
+}

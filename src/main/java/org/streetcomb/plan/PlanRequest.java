@@ -1,0 +1,18 @@
+package org.streetcomb.plan;
+
+import java.nio.file.Path;
+import org.streetcomb.network.LonLat;
+
+/**
+ * What to plan.
+ *
+ * @param input             the road layer
+ * @param depot             depot position, or null for the default (the first
+ *                          point of the first road line in the file)
+ * @param snapTolerance     vertices closer than this many metres are joined
+ * @param maxDepotDistance  the depot may lie at most this many metres from the nearest network node
+ * @param depotOnly         plan only the connected component that holds the depot
+ */
+public record PlanRequest(Path input, LonLat depot, double snapTolerance, double maxDepotDistance,
+                          boolean depotOnly) {
+}

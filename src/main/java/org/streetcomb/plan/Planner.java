@@ -1,0 +1,69 @@
+package org.streetcomb.plan;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+import org.streetcomb.InputError;
+import org.streetcomb.NoTourError;
+import org.streetcomb.network.Components;
+import org.streetcomb.network.LonLat;
+import org.streetcomb.network.NearestNode;
+import org.streetcomb.network.NetworkBuilder;
+import org.streetcomb.network.StreetNetwork;
+import org.streetcomb.read.LayerReaders;
+import org.streetcomb.read.RoadFeature;
+import org.streetcomb.read.RoadLayer;
+import org.streetcomb.solve.Augmentation;
+import org.streetcomb.solve.UndirectedPostman;
+import org.streetcomb.tour.Tour;
+import org.streetcomb.tour.TourPlanner;
+
+/** Runs the stages of a plan in order: read, build the network, place the depot, solve, order the tours. */
+public final class Planner {
+
+    private Planner() {
+    }
+
+    public static Plan plan(PlanRequest request, StageClock clock) {
+        RoadLayer layer = clock.time("read", () -> LayerReaders.read(request.input()));
+        List<String> warnings = new ArrayList<>();
+        long oneWay = layer.features().stream().filter(f -> f.travel().oneWay()).count();
+        if (oneWay > 0) {
+            warnings.add(oneWay + " one-way street lines are planned as two-way: one-way restrictions are not applied yet");
+        }
+        StreetNetwork network = clock.time("network", () -> new NetworkBuilder(request.snapTolerance()).build(layer.features()));
+        if (network.edgeCount() == 0) {
+            throw new NoTourError(request.input() + ": no street of positive length after noding");
+        }
+        Components components = Components.of(network);
+        LonLat depotPosition = request.depot() != null ? request.depot() : firstPoint(layer.features().get(0));
+        NearestNode.Hit depot = NearestNode.of(network, depotPosition.lon(), depotPosition.lat());
+        if (depot.distance() > request.maxDepotDistance()) {
+            throw new InputError(String.format(Locale.ROOT,
+                    "depot %.7f,%.7f is %.0f m from the nearest street node of %s (limit %.0f m): check the order "
+                    + "longitude,latitude or raise the limit", depotPosition.lon(), depotPosition.lat(), depot.distance(),
+                    request.input().getFileName(), request.maxDepotDistance()));
+        }
+        if (components.count() > 1) {
+            warnings.add(request.depotOnly()
+                    ? String.format(Locale.ROOT, "the network has %d separate parts: only the depot's part is planned "
+                      + "(%.2f km of %.2f km)", components.count(), components.length(components.of(depot.node())) / 1000,
+                      network.totalLength() / 1000)
+                    : String.format(Locale.ROOT, "the network has %d separate parts: one tour is planned for each",
+                      components.count()));
+        }
+        Augmentation augmentation = clock.time("solve", () -> UndirectedPostman.solve(network));
+        if (!augmentation.certified()) {
+            warnings.add("the pairing of odd nodes could not be proved optimal on this network (see docs/method.md)");
+        }
+        List<Tour> tours = clock.time("order", () ->
+                TourPlanner.tours(network, components, augmentation, depot.node(), request.depotOnly()));
+        return new Plan(request, layer.report(), network, components, depot.node(),
+                request.depot() != null ? depot.distance() : 0, augmentation, tours, List.copyOf(warnings));
+    }
+
+    private static LonLat firstPoint(RoadFeature feature) {
+        var c = feature.line().getCoordinateN(0);
+        return new LonLat(c.x, c.y);
+    }
+}

@@ -1,0 +1,200 @@
+package org.streetcomb.read;
+
+import com.fasterxml.jackson.core.JsonFactory;
+import com.fasterxml.jackson.core.JsonParser;
+import com.fasterxml.jackson.core.JsonProcessingException;
+import com.fasterxml.jackson.core.JsonToken;
+import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.ObjectMapper;
+import com.fasterxml.jackson.databind.node.ObjectNode;
+import java.io.IOException;
+import java.io.InputStream;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.Iterator;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.TreeMap;
+import org.locationtech.jts.geom.Coordinate;
+import org.locationtech.jts.geom.GeometryFactory;
+import org.locationtech.jts.geom.LineString;
+import org.locationtech.jts.geom.PrecisionModel;
+import org.streetcomb.InputError;
+
+/**
+ * Reads road centrelines from a GeoJSON FeatureCollection (RFC 7946) or a single Feature.
+ *
+ * <p>The collection is streamed: one feature at a time is held as a tree, so the layer's size is bounded
+ * by its kept lines, not by the JSON text. LineString and MultiLineString features are kept (one road
+ * line per part); every other geometry type, and features without geometry, are counted in the
+ * {@link ReadReport}. Positions must be finite and within longitude [-180, 180] and latitude [-90, 90];
+ * a third (altitude) value is ignored. Errors name the file, the line and the feature.
+ */
+public final class GeoJsonReader implements LayerReader {
+
+    private static final GeometryFactory GEOMETRY = new GeometryFactory(new PrecisionModel(), 4326);
+    private static final ObjectMapper MAPPER = new ObjectMapper();
+
+    private final String nameField;
+
+    public GeoJsonReader() {
+        this("name");
+    }
+
+    /** @param nameField the property that holds the street name */
+    public GeoJsonReader(String nameField) {
+        this.nameField = nameField;
+    }
+
+    @Override
+    public RoadLayer read(Path file) {
+        Collector collector = new Collector(file);
+        try (InputStream in = Files.newInputStream(file);
+             JsonParser parser = new JsonFactory(MAPPER).createParser(in)) {
+            readTopLevel(parser, collector);
+        } catch (JsonProcessingException e) {
+            var loc = e.getLocation();
+            String place = loc == null ? null : "line " + loc.getLineNr() + ", column " + loc.getColumnNr();
+            throw InputError.at(file, place, "malformed JSON: " + e.getOriginalMessage().lines().findFirst().orElse(""));
+        } catch (IOException e) {
+            throw InputError.at(file, null, "cannot read: " + e.getMessage());
+        }
+        if (collector.lines.isEmpty()) {
+            throw InputError.at(file, null, collector.featureCount == 0
+                    ? "no features: expected a FeatureCollection of LineString or MultiLineString road lines"
+                    : "no LineString or MultiLineString features among " + collector.featureCount
+                      + " (skipped: " + collector.skipped + ")");
+        }
+        return new RoadLayer(file, List.copyOf(collector.lines),
+                new ReadReport(collector.featureCount, collector.lines.size(), Map.copyOf(collector.skipped)));
+    }
+
+    private void readTopLevel(JsonParser parser, Collector collector) throws IOException {
+        if (parser.nextToken() != JsonToken.START_OBJECT) {
+            throw InputError.at(collector.file, "line 1", "expected a GeoJSON object");
+        }
+        String type = null;
+        // the other fields are kept in case the object is a single Feature
+        ObjectNode single = MAPPER.createObjectNode();
+        while (parser.nextToken() == JsonToken.FIELD_NAME) {
+            String field = parser.currentName();
+            JsonToken value = parser.nextToken();
+            if (field.equals("features") && value == JsonToken.START_ARRAY) {
+                while (parser.nextToken() != JsonToken.END_ARRAY) {
+                    int line = parser.currentLocation().getLineNr();
+                    JsonNode feature = parser.readValueAsTree();
+                    collector.feature(feature, line);
+                }
+            } else if (field.equals("type") && value == JsonToken.VALUE_STRING) {
+                type = parser.getText();
+            } else {
+                single.set(field, parser.readValueAsTree());
+            }
+        }
+        if ("Feature".equals(type)) {
+            collector.feature(single, 1);
+        } else if (!"FeatureCollection".equals(type)) {
+            throw InputError.at(collector.file, null, "top-level type is " + (type == null ? "missing" : '"' + type + '"')
+                    + ": expected \"FeatureCollection\" or \"Feature\"");
+        }
+    }
+
+    private final class Collector {
+        final Path file;
+        final List<RoadFeature> lines = new ArrayList<>();
+        final Map<String, Integer> skipped = new TreeMap<>();
+        int featureCount;
+
+        Collector(Path file) {
+            this.file = file;
+        }
+
+        void feature(JsonNode feature, int line) {
+            featureCount++;
+            String place = "line " + line + " (feature " + featureCount + ")";
+            if (!feature.isObject()) {
+                throw InputError.at(file, place, "a feature must be a JSON object");
+            }
+            JsonNode geometry = feature.get("geometry");
+            if (geometry == null || geometry.isNull()) {
+                skipped.merge("no geometry", 1, Integer::sum);
+                return;
+            }
+            String type = geometry.path("type").asText("");
+            JsonNode coordinates = geometry.get("coordinates");
+            Map<String, String> properties = properties(feature.get("properties"));
+            String id = featureId(feature, properties);
+            String name = properties.getOrDefault(nameField, "");
+            switch (type) {
+                case "LineString" -> add(id, name, properties, coordinates, place);
+                case "MultiLineString" -> {
+                    if (coordinates == null || !coordinates.isArray()) {
+                        throw InputError.at(file, place, "MultiLineString without a coordinates array");
+                    }
+                    for (JsonNode part : coordinates) {
+                        add(id, name, properties, part, place);
+                    }
+                }
+                default -> skipped.merge(type.isEmpty() ? "unknown geometry" : type, 1, Integer::sum);
+            }
+        }
+
+        private String featureId(JsonNode feature, Map<String, String> properties) {
+            JsonNode id = feature.get("id");
+            if (id != null && (id.isTextual() || id.isNumber())) {
+                return id.asText();
+            }
+            return properties.getOrDefault("id", "#" + featureCount);
+        }
+
+        private void add(String id, String name, Map<String, String> properties, JsonNode positions, String place) {
+            if (positions == null || !positions.isArray()) {
+                throw InputError.at(file, place, "LineString without a coordinates array");
+            }
+            if (positions.size() < 2) {
+                skipped.merge("LineString with fewer than 2 positions", 1, Integer::sum);
+                return;
+            }
+            Coordinate[] coords = new Coordinate[positions.size()];
+            int i = 0;
+            for (JsonNode position : positions) {
+                coords[i] = position(position, place + ", position " + (i + 1));
+                i++;
+            }
+            LineString line = GEOMETRY.createLineString(coords);
+            lines.add(new RoadFeature(id, name, line, Travel.BOTH, true, properties));
+        }
+
+        private Coordinate position(JsonNode position, String place) {
+            if (!position.isArray() || position.size() < 2 || !position.get(0).isNumber() || !position.get(1).isNumber()) {
+                throw InputError.at(file, place, "a position must be an array [longitude, latitude]");
+            }
+            double lon = position.get(0).asDouble();
+            double lat = position.get(1).asDouble();
+            if (!Double.isFinite(lon) || lon < -180 || lon > 180) {
+                throw InputError.at(file, place, "longitude " + lon + " outside [-180, 180]");
+            }
+            if (!Double.isFinite(lat) || lat < -90 || lat > 90) {
+                throw InputError.at(file, place, "latitude " + lat + " outside [-90, 90]"
+                        + (Math.abs(lon) <= 90 && Math.abs(lat) <= 180 ? " (are longitude and latitude swapped?)" : ""));
+            }
+            return new Coordinate(lon, lat);
+        }
+
+        private Map<String, String> properties(JsonNode node) {
+            Map<String, String> properties = new LinkedHashMap<>();
+            if (node != null && node.isObject()) {
+                for (Iterator<Map.Entry<String, JsonNode>> it = node.fields(); it.hasNext(); ) {
+                    Map.Entry<String, JsonNode> entry = it.next();
+                    JsonNode value = entry.getValue();
+                    if (!value.isNull()) {
+                        properties.put(entry.getKey(), value.isValueNode() ? value.asText() : value.toString());
+                    }
+                }
+            }
+            return properties;
+        }
+    }
+}

@@ -1,0 +1,19 @@
+package org.streetcomb.read;
+
+import java.util.Map;
+import org.locationtech.jts.geom.LineString;
+
+/**
+ * One road centreline as read from a layer: a single line in WGS84 longitude/latitude, with the source
+ * feature it came from. A multi-part feature becomes several road features with the same id.
+ *
+ * @param id         the source feature's id (its GeoJSON id, an id property, or its 1-based position)
+ * @param name       street name, or an empty string when the layer has none
+ * @param line       the centreline, x = longitude, y = latitude (degrees)
+ * @param travel     permitted directions of travel
+ * @param required   whether the street must be serviced (all streets unless a layer says otherwise)
+ * @param properties the feature's scalar attributes, as text
+ */
+public record RoadFeature(String id, String name, LineString line, Travel travel, boolean required,
+                          Map<String, String> properties) {
+}

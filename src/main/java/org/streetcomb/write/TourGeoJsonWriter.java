@@ -1,0 +1,138 @@
+package org.streetcomb.write;
+
+import com.fasterxml.jackson.core.JsonEncoding;
+import com.fasterxml.jackson.core.JsonFactory;
+import com.fasterxml.jackson.core.JsonGenerator;
+import java.io.IOException;
+import java.math.BigDecimal;
+import java.math.RoundingMode;
+import java.nio.file.Path;
+import java.util.List;
+import org.streetcomb.network.StreetNetwork;
+import org.streetcomb.tour.Tour;
+
+/**
+ * Writes tours as a GeoJSON FeatureCollection (RFC 7946): one Feature per tour whose geometry is the whole
+ * tour as one ordered LineString, and optionally one Feature per step. Coordinates are longitude,
+ * latitude with at most 7 decimals (about 1 cm), consecutive repeated points removed; there is no
+ * {@code crs} member, as RFC 7946 requires. Lengths are in metres with 3 decimals.
+ */
+public final class TourGeoJsonWriter {
+
+    private final boolean steps;
+
+    /** @param steps also write one feature per step */
+    public TourGeoJsonWriter(boolean steps) {
+        this.steps = steps;
+    }
+
+    public void write(Path target, StreetNetwork network, List<Tour> tours) {
+        AtomicFile.write(target, out -> {
+            try (JsonGenerator json = new JsonFactory().createGenerator(out, JsonEncoding.UTF8)
+                    .enable(JsonGenerator.Feature.WRITE_BIGDECIMAL_AS_PLAIN)) {
+                json.writeStartObject();
+                json.writeStringField("type", "FeatureCollection");
+                json.writeArrayFieldStart("features");
+                for (int t = 0; t < tours.size(); t++) {
+                    writeTour(json, network, tours.get(t), t + 1);
+                }
+                if (steps) {
+                    for (int t = 0; t < tours.size(); t++) {
+                        writeSteps(json, network, tours.get(t), t + 1);
+                    }
+                }
+                json.writeEndArray();
+                json.writeEndObject();
+                json.writeRaw('\n');
+            }
+        });
+    }
+
+    private static void writeTour(JsonGenerator json, StreetNetwork network, Tour tour, int number) throws IOException {
+        json.writeStartObject();
+        json.writeStringField("type", "Feature");
+        json.writeObjectFieldStart("properties");
+        json.writeNumberField("tour", number);
+        json.writeNumberField("steps", tour.steps());
+        double length = tour.length(network);
+        double deadhead = tour.deadhead(network);
+        json.writeNumberField("length_m", metres(length));
+        json.writeNumberField("service_m", metres(length - deadhead));
+        json.writeNumberField("deadhead_m", metres(deadhead));
+        json.writeEndObject();
+        json.writeObjectFieldStart("geometry");
+        json.writeStringField("type", "LineString");
+        json.writeArrayFieldStart("coordinates");
+        PointWriter points = new PointWriter(json);
+        for (int i = 0; i < tour.steps(); i++) {
+            points.edge(network, tour.edges()[i], tour.forward()[i]);
+        }
+        json.writeEndArray();
+        json.writeEndObject();
+        json.writeEndObject();
+    }
+
+    private static void writeSteps(JsonGenerator json, StreetNetwork network, Tour tour, int number) throws IOException {
+        for (int i = 0; i < tour.steps(); i++) {
+            int e = tour.edges()[i];
+            json.writeStartObject();
+            json.writeStringField("type", "Feature");
+            json.writeObjectFieldStart("properties");
+            json.writeNumberField("tour", number);
+            json.writeNumberField("step", i + 1);
+            json.writeStringField("feature_id", network.feature(e).id());
+            json.writeStringField("street", network.feature(e).name());
+            json.writeStringField("pass", tour.service()[i] ? "service" : "deadhead");
+            json.writeNumberField("length_m", metres(network.length(e)));
+            json.writeEndObject();
+            json.writeObjectFieldStart("geometry");
+            json.writeStringField("type", "LineString");
+            json.writeArrayFieldStart("coordinates");
+            new PointWriter(json).edge(network, e, tour.forward()[i]);
+            json.writeEndArray();
+            json.writeEndObject();
+            json.writeEndObject();
+        }
+    }
+
+    static BigDecimal metres(double value) {
+        return BigDecimal.valueOf(value).setScale(3, RoundingMode.HALF_EVEN);
+    }
+
+    /** Writes positions rounded to 7 decimals, skipping a point equal to the one before it. */
+    private static final class PointWriter {
+        private final JsonGenerator json;
+        private BigDecimal lastLon;
+        private BigDecimal lastLat;
+
+        PointWriter(JsonGenerator json) {
+            this.json = json;
+        }
+
+        void edge(StreetNetwork network, int e, boolean forward) throws IOException {
+            int count = network.pointCount(e);
+            for (int k = 0; k < count; k++) {
+                int i = forward ? k : count - 1 - k;
+                point(network.pointLon(e, i), network.pointLat(e, i));
+            }
+        }
+
+        private void point(double lon, double lat) throws IOException {
+            BigDecimal x = degrees(lon);
+            BigDecimal y = degrees(lat);
+            if (x.equals(lastLon) && y.equals(lastLat)) {
+                return;
+            }
+            json.writeStartArray();
+            json.writeNumber(x);
+            json.writeNumber(y);
+            json.writeEndArray();
+            lastLon = x;
+            lastLat = y;
+        }
+
+        private static BigDecimal degrees(double value) {
+            return BigDecimal.valueOf(value).setScale(7, RoundingMode.HALF_EVEN).stripTrailingZeros();
+        }
+    }
+}
