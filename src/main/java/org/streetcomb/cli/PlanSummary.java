@@ -26,6 +26,9 @@ final class PlanSummary {
     static final String CAUTION = "Plans are advice: obey traffic law and signs, never handle a device while driving, "
             + "follow local rules and your own risk assessment; map data may be out of date.";
 
+    /** Tours listed one per line in the text summary; --json lists all. */
+    private static final int TOURS_LISTED = 10;
+
     private final ObjectNode json = MAPPER.createObjectNode();
     private final StringBuilder text = new StringBuilder();
 
@@ -104,10 +107,14 @@ final class PlanSummary {
         line("Tour", "%.3f km: service %.3f km, deadhead %.3f km (%.1f %%)", tour / 1000, plan.serviceLength() / 1000,
                 deadhead / 1000, tour == 0 ? 0 : 100 * deadhead / tour);
         if (plan.tours().size() > 1) {
-            for (int t = 0; t < plan.tours().size(); t++) {
+            int shown = Math.min(plan.tours().size(), TOURS_LISTED);
+            for (int t = 0; t < shown; t++) {
                 Tour tr = plan.tours().get(t);
                 line("  tour " + (t + 1), "%.3f km, deadhead %.3f km, %d steps, from node %d", tr.length(network) / 1000,
                         tr.deadhead(network) / 1000, tr.steps(), tr.start());
+            }
+            if (shown < plan.tours().size()) {
+                line("", "... and %d smaller tours (all are listed by --json)", plan.tours().size() - shown);
             }
         } else {
             line("Steps", "%d", plan.tours().get(0).steps());

@@ -26,33 +26,25 @@ import org.streetcomb.network.StreetNetwork;
  * search per node and T(T-1)/2 edges: hopeless past a few thousand odd nodes. Here the matching runs on a
  * sparse candidate graph (each odd node joined to its k nearest odd nodes by network distance) with
  * Kolmogorov's Blossom V (JGraphT's {@link KolmogorovWeightedPerfectMatching}), and the result is then
- * <em>priced</em> against the complete graph with the matching's dual solution. Writing Y(u) for the
- * node dual of u plus the duals of all blossoms that contain u, the dual is feasible for the complete
- * graph if d(u,v) &ge; Y(u) + Y(v) for every pair (blossom duals are non-negative, so this bounds the
- * exact constraint from above). One Dijkstra search seeded at every odd node s with label -Y(s), keeping
- * the two best labels from distinct seeds at each node, finds for every odd v the smallest
- * d(s,v) - Y(s) over s &ne; v in O(E log E). Violated pairs are added as candidates and the matching is
- * solved again; when none are left, primal and dual agree on the complete graph and the matching is
- * optimal there. A violation on a pair that is already a candidate can only come from a blossom dual;
- * the conservative test then cannot certify, and the matching is solved on the complete graph when that
- * is small enough, else returned with {@link Result#certified()} false.
+ * <em>priced</em> against the complete graph with the matching's dual solution, as in column generation:
+ * any pair whose reduced cost is negative is added as a candidate and the matching is solved again.
+ * When no such pair is left, the dual is feasible for the complete graph and equals the primal cost, so
+ * the matching is optimal there: the result is exact, not a heuristic. Pricing every pair costs a few
+ * multi-source Dijkstra searches, O(E log E) each, rather than T searches (see {@link #price}). On street
+ * networks a handful of rounds suffice; the candidate set only grows, so the loop ends.
  *
  * <p>Distances are passed to Blossom V in kilometres: it is known to misbehave on badly scaled inputs and
  * treats costs above 1e10 as forbidden.
  */
 public final class OddVertexMatching {
 
-    /** Odd-node counts up to this are solved on the complete graph when pricing cannot certify. */
-    static final int COMPLETE_GRAPH_LIMIT = 1500;
-
     /**
      * @param pairs          matched network nodes: pairs[2i] with pairs[2i+1]
      * @param cost           total shortest-path distance of the pairs, metres
-     * @param certified      whether optimality over the complete graph was proved
      * @param rounds         Blossom V runs
      * @param candidateEdges edges in the last candidate graph
      */
-    public record Result(int[] pairs, double cost, boolean certified, int rounds, int candidateEdges) {
+    public record Result(int[] pairs, double cost, int rounds, int candidateEdges) {
     }
 
     private final StreetNetwork network;
@@ -77,7 +69,7 @@ public final class OddVertexMatching {
      */
     public static Result solve(StreetNetwork network, int[] odd, int neighbours) {
         if (odd.length == 0) {
-            return new Result(new int[0], 0, true, 0, 0);
+            return new Result(new int[0], 0, 0, 0);
         }
         return new OddVertexMatching(network, odd).run(neighbours);
     }
@@ -93,26 +85,10 @@ public final class OddVertexMatching {
                 // the candidate graph has no perfect matching: widen it
                 k *= 2;
                 addNearest(k);
-                continue;
+            } else if (price(solution) == 0) {
+                return new Result(solution.pairs, solution.cost, rounds, candidates.size());
             }
-            Pricing pricing = price(solution.potential);
-            if (pricing.added > 0) {
-                continue;
-            }
-            if (pricing.blossomAlarms == 0) {
-                return result(solution, true, rounds);
-            }
-            if (odd.length <= COMPLETE_GRAPH_LIMIT && k < odd.length - 1) {
-                k = odd.length - 1;
-                addNearest(k);
-                continue;
-            }
-            return result(solution, k >= odd.length - 1, rounds);
         }
-    }
-
-    private Result result(Solution solution, boolean certified, int rounds) {
-        return new Result(solution.pairs, solution.cost, certified, rounds, candidates.size());
     }
 
     /** Adds, for every odd node, its k nearest odd nodes by network distance as candidate partners. */
@@ -147,7 +123,8 @@ public final class OddVertexMatching {
         return i < j ? (long) i * odd.length + j : (long) j * odd.length + i;
     }
 
-    private record Solution(int[] pairs, double cost, double[] potential) {
+    /** A matching with its dual: potential[u] = Y(u), the node dual plus all blossom duals holding u. */
+    private record Solution(int[] pairs, double cost, double[] potential, List<Map.Entry<int[], Double>> blossoms) {
     }
 
     /** Blossom V on the candidate graph; null when it has no perfect matching. */
@@ -183,76 +160,201 @@ public final class OddVertexMatching {
             cost += candidates.get(key(i, j));
         }
         double[] potential = new double[odd.length];
+        List<Map.Entry<int[], Double>> blossoms = new ArrayList<>();
         for (Map.Entry<Set<Integer>, Double> dual : blossom.getDualSolution().getDualVariables().entrySet()) {
-            for (int i : dual.getKey()) {
-                potential[i] += dual.getValue() * 1000.0;
+            double value = dual.getValue() * 1000.0;
+            int[] members = dual.getKey().stream().mapToInt(Integer::intValue).sorted().toArray();
+            for (int i : members) {
+                potential[i] += value;
+            }
+            if (members.length > 1) {
+                blossoms.add(Map.entry(members, value));
             }
         }
-        return new Solution(pairs, cost, potential);
+        return new Solution(pairs, cost, potential, blossoms);
     }
 
-    private record Pricing(int added, int blossomAlarms) {
-    }
-
-    /** Finds pairs whose reduced cost d(u,v) - Y(u) - Y(v) is negative and adds them as candidates. */
-    private Pricing price(double[] potential) {
-        int n = network.nodeCount();
-        int[] bestSource = new int[n];
-        int[] secondSource = new int[n];
-        double[] bestLabel = new double[n];
-        double[] secondLabel = new double[n];
-        byte[] settledCount = new byte[n];
-        Arrays.fill(bestSource, -1);
-        Arrays.fill(secondSource, -1);
-        EntryHeap heap = new EntryHeap();
-        for (int i = 0; i < odd.length; i++) {
-            heap.push(-potential[i], odd[i], i);
-        }
-        while (!heap.isEmpty()) {
-            double label = heap.key();
-            int v = heap.node();
-            int s = heap.source();
-            heap.pop();
-            if (settledCount[v] == 2 || (settledCount[v] == 1 && bestSource[v] == s)) {
-                continue;
-            }
-            if (settledCount[v] == 0) {
-                bestSource[v] = s;
-                bestLabel[v] = label;
-            } else {
-                secondSource[v] = s;
-                secondLabel[v] = label;
-            }
-            settledCount[v]++;
-            for (int a = network.incidenceStart(v); a < network.incidenceEnd(v); a++) {
-                int e = network.incidentEdge(a);
-                int w = network.other(e, v);
-                if (settledCount[w] < 2) {
-                    heap.push(label + network.length(e), w, s);
+    /**
+     * Adds every non-candidate pair with negative reduced cost as a candidate, and returns how many.
+     *
+     * <p>For a laminar family of blossoms the reduced cost of a pair is d(u,v) - P(u) - P(v), where P sums
+     * the node dual and the duals of the blossoms that contain one of the pair but not the other. This is
+     * checked level by level: at the top, P(u) = Y(u) and pairs in different top-level groups (blossom or
+     * single node) are priced by one search that keeps, at every network node, the two best labels from
+     * seeds of distinct groups. Inside each blossom B the same is repeated for its members, with z(B)
+     * taken off their potentials and B's own sub-blossoms as the groups. A search stops once its labels
+     * exceed every member's potential, so the inner searches stay local.
+     */
+    private int price(Solution solution) {
+        Laminar laminar = new Laminar(solution.blossoms, odd.length);
+        GroupSearch search = new GroupSearch();
+        int added = 0;
+        java.util.ArrayDeque<int[]> levels = new java.util.ArrayDeque<>();
+        int[] all = IntStream.range(0, odd.length).toArray();
+        levels.add(new int[] {-1});
+        double[] potential = solution.potential.clone();
+        while (!levels.isEmpty()) {
+            int blossom = levels.poll()[0];
+            int[] members = blossom < 0 ? all : laminar.members(blossom);
+            if (blossom >= 0) {
+                for (int u : members) {
+                    potential[u] -= laminar.value(blossom);
                 }
             }
-        }
-        int added = 0, alarms = 0;
-        for (int j = 0; j < odd.length; j++) {
-            int v = odd[j];
-            boolean bestIsSelf = bestSource[v] == j;
-            int s = bestIsSelf ? secondSource[v] : bestSource[v];
-            if (s < 0) {
-                continue;
+            int depth = blossom < 0 ? 0 : laminar.depth(blossom) + 1;
+            added += search.run(members, potential, u -> laminar.groupAt(u, depth));
+            for (int child : laminar.children(blossom)) {
+                levels.add(new int[] {child});
             }
-            double label = bestIsSelf ? secondLabel[v] : bestLabel[v];
-            double tolerance = 1e-6 + 1e-9 * Math.abs(potential[j]);
-            if (label - potential[j] < -tolerance) {
-                long key = key(s, j);
-                if (candidates.containsKey(key)) {
-                    alarms++;
+        }
+        return added;
+    }
+
+    /** The blossoms of a dual solution as a tree: for each odd node, the blossoms holding it, outermost first. */
+    private static final class Laminar {
+        private final List<int[]> members = new ArrayList<>();
+        private final List<Double> values = new ArrayList<>();
+        private final List<Integer> depths = new ArrayList<>();
+        private final List<List<Integer>> children = new ArrayList<>();
+        private final List<Integer> roots = new ArrayList<>();
+        private final int[][] chain;
+
+        Laminar(List<Map.Entry<int[], Double>> blossoms, int oddCount) {
+            List<Map.Entry<int[], Double>> sorted = new ArrayList<>(blossoms);
+            sorted.sort((a, b) -> Integer.compare(b.getKey().length, a.getKey().length));
+            List<List<Integer>> chains = new ArrayList<>();
+            for (int u = 0; u < oddCount; u++) {
+                chains.add(new ArrayList<>());
+            }
+            for (Map.Entry<int[], Double> entry : sorted) {
+                int id = members.size();
+                int[] set = entry.getKey();
+                List<Integer> outer = chains.get(set[0]);
+                int parent = outer.isEmpty() ? -1 : outer.get(outer.size() - 1);
+                members.add(set);
+                values.add(entry.getValue());
+                depths.add(parent < 0 ? 0 : depths.get(parent) + 1);
+                children.add(new ArrayList<>());
+                (parent < 0 ? roots : children.get(parent)).add(id);
+                for (int u : set) {
+                    chains.get(u).add(id);
+                }
+            }
+            chain = new int[oddCount][];
+            for (int u = 0; u < oddCount; u++) {
+                chain[u] = chains.get(u).stream().mapToInt(Integer::intValue).toArray();
+            }
+        }
+
+        int[] members(int blossom) {
+            return members.get(blossom);
+        }
+
+        double value(int blossom) {
+            return values.get(blossom);
+        }
+
+        int depth(int blossom) {
+            return depths.get(blossom);
+        }
+
+        List<Integer> children(int blossom) {
+            return blossom < 0 ? roots : children.get(blossom);
+        }
+
+        /** The group of u among the members of a blossom at {@code depth}: a sub-blossom, or u alone. */
+        int groupAt(int u, int depth) {
+            return depth < chain[u].length ? -1 - chain[u][depth] : u;
+        }
+    }
+
+    /**
+     * A Dijkstra search seeded at odd nodes with labels -P(u) that keeps, at every network node, the two
+     * best labels from seeds of distinct groups; then, for every seed v, the best label from another group
+     * is min over u of d(u,v) - P(u), to be compared with P(v). Arrays are reset by stamp, not refilled.
+     */
+    private final class GroupSearch {
+        private final int[] stamp = new int[network.nodeCount()];
+        private final int[] bestGroup = new int[network.nodeCount()];
+        private final int[] bestSeed = new int[network.nodeCount()];
+        private final double[] bestLabel = new double[network.nodeCount()];
+        private final int[] secondGroup = new int[network.nodeCount()];
+        private final int[] secondSeed = new int[network.nodeCount()];
+        private final double[] secondLabel = new double[network.nodeCount()];
+        private final byte[] settled = new byte[network.nodeCount()];
+        private int current;
+
+        int run(int[] members, double[] potential, java.util.function.IntUnaryOperator group) {
+            current++;
+            EntryHeap heap = new EntryHeap();
+            double ceiling = Double.NEGATIVE_INFINITY;
+            for (int u : members) {
+                heap.push(-potential[u], odd[u], u);
+                ceiling = Math.max(ceiling, potential[u]);
+            }
+            ceiling += tolerance(ceiling);
+            while (!heap.isEmpty() && heap.key() <= ceiling) {
+                double label = heap.key();
+                int v = heap.node();
+                int seed = heap.source();
+                heap.pop();
+                if (stamp[v] != current) {
+                    stamp[v] = current;
+                    settled[v] = 0;
+                }
+                int g = group.applyAsInt(seed);
+                if (settled[v] == 2 || (settled[v] == 1 && bestGroup[v] == g)) {
+                    continue;
+                }
+                if (settled[v] == 0) {
+                    bestGroup[v] = g;
+                    bestSeed[v] = seed;
+                    bestLabel[v] = label;
                 } else {
-                    candidates.put(key, label + potential[s]);
-                    added++;
+                    secondGroup[v] = g;
+                    secondSeed[v] = seed;
+                    secondLabel[v] = label;
+                }
+                settled[v]++;
+                for (int a = network.incidenceStart(v); a < network.incidenceEnd(v); a++) {
+                    int e = network.incidentEdge(a);
+                    int w = network.other(e, v);
+                    if (stamp[w] != current || settled[w] < 2) {
+                        heap.push(label + network.length(e), w, seed);
+                    }
                 }
             }
+            int added = 0;
+            for (int j : members) {
+                int v = odd[j];
+                if (stamp[v] != current) {
+                    continue;
+                }
+                int g = group.applyAsInt(j);
+                int seed;
+                double label;
+                if (settled[v] >= 1 && bestGroup[v] != g) {
+                    seed = bestSeed[v];
+                    label = bestLabel[v];
+                } else if (settled[v] == 2) {
+                    seed = secondSeed[v];
+                    label = secondLabel[v];
+                } else {
+                    continue;
+                }
+                if (label - potential[j] < -tolerance(potential[j])) {
+                    long key = key(seed, j);
+                    if (candidates.putIfAbsent(key, label + potential[seed]) == null) {
+                        added++;
+                    }
+                }
+            }
+            return added;
         }
-        return new Pricing(added, alarms);
+    }
+
+    private static double tolerance(double potential) {
+        return 1e-5 + 1e-9 * Math.abs(potential);
     }
 
     /** A heap of (label, node, source) entries for the two-best-seeds search. */

