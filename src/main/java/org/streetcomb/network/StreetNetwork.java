@@ -65,6 +65,34 @@ public final class StreetNetwork {
         }
     }
 
+    /**
+     * A network given as an abstract graph (a benchmark instance, say) rather than as geometry: edge
+     * {@code e} joins nodes {@code from[e]} and {@code to[e]} with the given length, and carries its
+     * feature's travel and required flags. Nodes are drawn on a small circle at 0,0 so that every edge
+     * still has a polyline for output.
+     */
+    public static StreetNetwork ofGraph(int nodeCount, int[] from, int[] to, double[] length, List<RoadFeature> features) {
+        double[] lon = new double[nodeCount];
+        double[] lat = new double[nodeCount];
+        for (int v = 0; v < nodeCount; v++) {
+            lon[v] = 0.01 * Math.cos(2 * Math.PI * v / nodeCount);
+            lat[v] = 0.01 * Math.sin(2 * Math.PI * v / nodeCount);
+        }
+        int m = from.length;
+        int[] pointStart = new int[m + 1];
+        double[] points = new double[4 * m];
+        int[] feature = new int[m];
+        for (int e = 0; e < m; e++) {
+            pointStart[e + 1] = 2 * (e + 1);
+            points[4 * e] = lon[from[e]];
+            points[4 * e + 1] = lat[from[e]];
+            points[4 * e + 2] = lon[to[e]];
+            points[4 * e + 3] = lat[to[e]];
+            feature[e] = e;
+        }
+        return new StreetNetwork(lon, lat, from.clone(), to.clone(), length.clone(), feature, pointStart, points, features);
+    }
+
     public int nodeCount() {
         return nodeLon.length;
     }
