@@ -41,10 +41,6 @@ public final class PlanCommand implements Callable<Integer> {
     @Option(names = "--steps", description = "Also write one GeoJSON feature per step of each tour.")
     boolean steps;
 
-    @Option(names = "--snap", paramLabel = "METRES", defaultValue = "0.5",
-            description = "Join line ends and vertices closer than this (default: ${DEFAULT-VALUE} m).")
-    double snap;
-
     @Option(names = "--depot-reach", paramLabel = "METRES", defaultValue = "500",
             description = "Refuse a depot farther than this from the nearest street node (default: ${DEFAULT-VALUE} m).")
     double depotReach;
@@ -60,20 +56,21 @@ public final class PlanCommand implements Callable<Integer> {
     @Option(names = {"-q", "--quiet"}, description = "No progress messages on stderr.")
     boolean quiet;
 
+    @CommandLine.Mixin
+    LayerOptions layer;
+
     @CommandLine.Spec
     CommandLine.Model.CommandSpec spec;
 
     @Override
     public Integer call() {
-        if (!(snap > 0) || snap > 100) {
-            throw new CommandLine.ParameterException(spec.commandLine(), "--snap must be above 0 and at most 100 metres");
-        }
+        double snap = layer.snap();
         if (!(depotReach >= 0)) {
             throw new CommandLine.ParameterException(spec.commandLine(), "--depot-reach must be 0 or more metres");
         }
         PrintWriter stdout = spec.commandLine().getOut();
         StageClock clock = new StageClock(TerminalProgress.forCommandLine(quiet, System.err));
-        Plan plan = Planner.plan(new PlanRequest(input, depot, snap, depotReach, depotOnly), clock);
+        Plan plan = Planner.plan(new PlanRequest(input, depot, snap, depotReach, depotOnly, layer.readOptions()), clock);
         if (out != null) {
             clock.run("write", () -> new TourGeoJsonWriter(steps).write(out, plan.network(), plan.tours()));
         }

@@ -44,6 +44,10 @@ final class PlanSummary {
         input.put("lines", plan.read().linesKept());
         ObjectNode skipped = input.putObject("skipped");
         plan.read().skippedByType().forEach(skipped::put);
+        input.put("one_way_lines", plan.read().oneWayLines());
+        ObjectNode notes = input.putObject("notes");
+        plan.read().notes().forEach(notes::put);
+        input.put("crs", plan.read().sourceCrs());
 
         ObjectNode net = s.json.putObject("network");
         net.put("edges", network.edgeCount());
@@ -93,8 +97,10 @@ final class PlanSummary {
 
     private void buildText(Plan plan, List<StageClock.Stage> stages, Path out) {
         StreetNetwork network = plan.network();
-        line("Layer", "%s: %d features, %d road lines%s", plan.request().input(), plan.read().featuresRead(),
-                plan.read().linesKept(), skippedText(plan.read().skippedByType()));
+        line("Layer", "%s: %d features, %d road lines (%d one-way)%s", plan.request().input(), plan.read().featuresRead(),
+                plan.read().linesKept(), plan.read().oneWayLines(), skippedText(plan.read().skippedByType()));
+        line("CRS", "%s", plan.read().sourceCrs());
+        plan.read().notes().forEach((what, n) -> line("Note", "%d x %s", n, what));
         line("Network", "%.3f km in %d edges, %d nodes (%d odd), %d part%s", network.totalLength() / 1000,
                 network.edgeCount(), network.nodeCount(), plan.augmentation().oddNodes(), plan.components().count(),
                 plan.components().count() == 1 ? "" : "s");

@@ -2,6 +2,7 @@ package org.streetcomb.plan;
 
 import java.nio.file.Path;
 import org.streetcomb.network.LonLat;
+import org.streetcomb.read.ReadOptions;
 
 /**
  * What to plan.
@@ -12,7 +13,12 @@ import org.streetcomb.network.LonLat;
  * @param snapTolerance     vertices closer than this many metres are joined
  * @param maxDepotDistance  the depot may lie at most this many metres from the nearest network node
  * @param depotOnly         plan only the connected component that holds the depot
+ * @param readOptions       how to read the layer
  */
 public record PlanRequest(Path input, LonLat depot, double snapTolerance, double maxDepotDistance,
-                          boolean depotOnly) {
+                          boolean depotOnly, ReadOptions readOptions) {
+
+    public PlanRequest(Path input, LonLat depot, double snapTolerance, double maxDepotDistance, boolean depotOnly) {
+        this(input, depot, snapTolerance, maxDepotDistance, depotOnly, ReadOptions.DEFAULTS);
+    }
 }

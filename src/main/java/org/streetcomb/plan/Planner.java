@@ -13,6 +13,7 @@ import org.streetcomb.network.StreetNetwork;
 import org.streetcomb.read.LayerReaders;
 import org.streetcomb.read.RoadFeature;
 import org.streetcomb.read.RoadLayer;
+import org.streetcomb.read.Travel;
 import org.streetcomb.solve.Augmentation;
 import org.streetcomb.solve.UndirectedPostman;
 import org.streetcomb.tour.Tour;
@@ -25,13 +26,14 @@ public final class Planner {
     }
 
     public static Plan plan(PlanRequest request, StageClock clock) {
-        RoadLayer layer = clock.time("read", () -> LayerReaders.read(request.input()));
+        RoadLayer layer = clock.time("read", () -> LayerReaders.read(request.input(), request.readOptions()));
         List<String> warnings = new ArrayList<>();
         long oneWay = layer.features().stream().filter(f -> f.travel().oneWay()).count();
         if (oneWay > 0) {
             warnings.add(oneWay + " one-way street lines are planned as two-way: one-way restrictions are not applied yet");
         }
-        StreetNetwork network = clock.time("network", () -> new NetworkBuilder(request.snapTolerance()).build(layer.features()));
+        List<RoadFeature> lines = oneWay > 0 ? twoWay(layer.features()) : layer.features();
+        StreetNetwork network = clock.time("network", () -> new NetworkBuilder(request.snapTolerance()).build(lines));
         if (network.edgeCount() == 0) {
             throw new NoTourError(request.input() + ": no street of positive length after noding");
         }
@@ -60,6 +62,12 @@ public final class Planner {
                 TourPlanner.tours(network, components, augmentation, depot.node(), request.depotOnly()));
         return new Plan(request, layer.report(), network, components, depot.node(),
                 request.depot() != null ? depot.distance() : 0, augmentation, tours, List.copyOf(warnings));
+    }
+
+    /** The lines with every one-way street opened to both directions, for the undirected solver. */
+    private static List<RoadFeature> twoWay(List<RoadFeature> features) {
+        return features.stream().map(f -> f.travel().oneWay()
+                ? new RoadFeature(f.id(), f.name(), f.line(), Travel.BOTH, f.required(), f.properties()) : f).toList();
     }
 
     private static LonLat firstPoint(RoadFeature feature) {

@@ -11,12 +11,9 @@ import java.io.IOException;
 import java.io.InputStream;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.util.ArrayList;
 import java.util.Iterator;
 import java.util.LinkedHashMap;
-import java.util.List;
 import java.util.Map;
-import java.util.TreeMap;
 import org.locationtech.jts.geom.Coordinate;
 import org.locationtech.jts.geom.GeometryFactory;
 import org.locationtech.jts.geom.LineString;
@@ -37,15 +34,14 @@ public final class GeoJsonReader implements LayerReader {
     private static final GeometryFactory GEOMETRY = new GeometryFactory(new PrecisionModel(), 4326);
     private static final ObjectMapper MAPPER = new ObjectMapper();
 
-    private final String nameField;
+    private final AttributeMapping mapping;
 
     public GeoJsonReader() {
-        this("name");
+        this(ReadOptions.DEFAULTS);
     }
 
-    /** @param nameField the property that holds the street name */
-    public GeoJsonReader(String nameField) {
-        this.nameField = nameField;
+    public GeoJsonReader(ReadOptions options) {
+        this.mapping = new AttributeMapping(options);
     }
 
     @Override
@@ -61,14 +57,13 @@ public final class GeoJsonReader implements LayerReader {
         } catch (IOException e) {
             throw InputError.at(file, null, "cannot read: " + e.getMessage());
         }
-        if (collector.lines.isEmpty()) {
-            throw InputError.at(file, null, collector.featureCount == 0
+        ReadTally tally = collector.tally;
+        if (tally.isEmpty()) {
+            throw InputError.at(file, null, tally.features() == 0
                     ? "no features: expected a FeatureCollection of LineString or MultiLineString road lines"
-                    : "no LineString or MultiLineString features among " + collector.featureCount
-                      + " (skipped: " + collector.skipped + ")");
+                    : "no road lines kept among " + tally.features() + " features (skipped: " + tally.skippedText() + ")");
         }
-        return new RoadLayer(file, List.copyOf(collector.lines),
-                new ReadReport(collector.featureCount, collector.lines.size(), Map.copyOf(collector.skipped)));
+        return tally.layer(file, ReadReport.WGS84);
     }
 
     private void readTopLevel(JsonParser parser, Collector collector) throws IOException {
@@ -103,58 +98,60 @@ public final class GeoJsonReader implements LayerReader {
 
     private final class Collector {
         final Path file;
-        final List<RoadFeature> lines = new ArrayList<>();
-        final Map<String, Integer> skipped = new TreeMap<>();
-        int featureCount;
+        final ReadTally tally = new ReadTally();
 
         Collector(Path file) {
             this.file = file;
         }
 
         void feature(JsonNode feature, int line) {
-            featureCount++;
-            String place = "line " + line + " (feature " + featureCount + ")";
+            int number = tally.feature();
+            String place = "line " + line + " (feature " + number + ")";
             if (!feature.isObject()) {
                 throw InputError.at(file, place, "a feature must be a JSON object");
             }
             JsonNode geometry = feature.get("geometry");
             if (geometry == null || geometry.isNull()) {
-                skipped.merge("no geometry", 1, Integer::sum);
+                tally.skip("no geometry");
                 return;
             }
             String type = geometry.path("type").asText("");
             JsonNode coordinates = geometry.get("coordinates");
             Map<String, String> properties = properties(feature.get("properties"));
-            String id = featureId(feature, properties);
-            String name = properties.getOrDefault(nameField, "");
-            switch (type) {
-                case "LineString" -> add(id, name, properties, coordinates, place);
-                case "MultiLineString" -> {
-                    if (coordinates == null || !coordinates.isArray()) {
-                        throw InputError.at(file, place, "MultiLineString without a coordinates array");
-                    }
-                    for (JsonNode part : coordinates) {
-                        add(id, name, properties, part, place);
-                    }
-                }
-                default -> skipped.merge(type.isEmpty() ? "unknown geometry" : type, 1, Integer::sum);
+            if (!type.equals("LineString") && !type.equals("MultiLineString")) {
+                tally.skip(type.isEmpty() ? "unknown geometry" : type);
+                return;
+            }
+            if (!mapping.keeps(properties, tally)) {
+                return;
+            }
+            String id = featureId(feature, properties, number);
+            if (type.equals("LineString")) {
+                add(id, properties, coordinates, place);
+                return;
+            }
+            if (coordinates == null || !coordinates.isArray()) {
+                throw InputError.at(file, place, "MultiLineString without a coordinates array");
+            }
+            for (JsonNode part : coordinates) {
+                add(id, properties, part, place);
             }
         }
 
-        private String featureId(JsonNode feature, Map<String, String> properties) {
+        private String featureId(JsonNode feature, Map<String, String> properties, int number) {
             JsonNode id = feature.get("id");
             if (id != null && (id.isTextual() || id.isNumber())) {
                 return id.asText();
             }
-            return properties.getOrDefault("id", "#" + featureCount);
+            return properties.getOrDefault("id", "#" + number);
         }
 
-        private void add(String id, String name, Map<String, String> properties, JsonNode positions, String place) {
+        private void add(String id, Map<String, String> properties, JsonNode positions, String place) {
             if (positions == null || !positions.isArray()) {
                 throw InputError.at(file, place, "LineString without a coordinates array");
             }
             if (positions.size() < 2) {
-                skipped.merge("LineString with fewer than 2 positions", 1, Integer::sum);
+                tally.skip("LineString with fewer than 2 positions");
                 return;
             }
             Coordinate[] coords = new Coordinate[positions.size()];
@@ -164,7 +161,7 @@ public final class GeoJsonReader implements LayerReader {
                 i++;
             }
             LineString line = GEOMETRY.createLineString(coords);
-            lines.add(new RoadFeature(id, name, line, Travel.BOTH, true, properties));
+            tally.keep(mapping.road(id, properties, line, tally));
         }
 
         private Coordinate position(JsonNode position, String place) {

@@ -12,16 +12,23 @@ public final class LayerReaders {
     }
 
     public static RoadLayer read(Path file) {
+        return read(file, ReadOptions.DEFAULTS);
+    }
+
+    public static RoadLayer read(Path file, ReadOptions options) {
         if (!Files.isRegularFile(file)) {
             throw InputError.at(file, null, "no such file");
         }
-        return forFile(file).read(file);
+        return forFile(file, options).read(file);
     }
 
-    static LayerReader forFile(Path file) {
+    static LayerReader forFile(Path file, ReadOptions options) {
         String name = file.getFileName().toString().toLowerCase(Locale.ROOT);
         if (name.endsWith(".geojson") || name.endsWith(".json")) {
-            return new GeoJsonReader();
+            if (options.crs() != null) {
+                throw InputError.at(file, null, "--crs does not apply: GeoJSON is always WGS84 longitude/latitude (RFC 7946)");
+            }
+            return new GeoJsonReader(options);
         }
         throw InputError.at(file, null, "unknown file type: expected .geojson or .json");
     }

@@ -1,0 +1,76 @@
+package org.streetcomb.read;
+
+import java.util.Locale;
+import java.util.Map;
+import java.util.Set;
+import org.locationtech.jts.geom.LineString;
+
+/**
+ * Turns a geometric layer's feature attributes into road features as {@link ReadOptions} says: keeps or
+ * drops features by the filters, and reads the street name, the one-way flag and the required flag.
+ * A one-way value that is neither forward, backward nor two-way is read as two-way and counted in the
+ * report, so a layer with an unexpected encoding shows up in the summary instead of failing.
+ */
+final class AttributeMapping {
+
+    /** Values of the required field that mean "must be serviced" (common practice). */
+    private static final Set<String> TRUE_VALUES = Set.of("yes", "true", "1", "y", "t");
+
+    private final ReadOptions options;
+
+    AttributeMapping(ReadOptions options) {
+        this.options = options;
+    }
+
+    /** Whether the filters keep a feature with these attributes; counts the dropped ones. */
+    boolean keeps(Map<String, String> properties, ReadTally tally) {
+        for (ReadOptions.FieldFilter filter : options.keep()) {
+            if (!filter.matches(properties)) {
+                tally.skip("not matching --keep " + filter);
+                return false;
+            }
+        }
+        for (ReadOptions.FieldFilter filter : options.drop()) {
+            if (filter.matches(properties)) {
+                tally.skip("matching --drop " + filter);
+                return false;
+            }
+        }
+        return true;
+    }
+
+    /** The road feature for one line of a kept feature. */
+    RoadFeature road(String id, Map<String, String> properties, LineString line, ReadTally tally) {
+        String name = properties.getOrDefault(options.nameField(), "");
+        return new RoadFeature(id, name, line, travel(properties, tally), required(properties), properties);
+    }
+
+    private Travel travel(Map<String, String> properties, ReadTally tally) {
+        if (options.onewayField() == null) {
+            return Travel.BOTH;
+        }
+        String raw = properties.get(options.onewayField());
+        if (raw == null) {
+            return Travel.BOTH;
+        }
+        String value = raw.trim().toLowerCase(Locale.ROOT);
+        if (options.onewayForward().contains(value)) {
+            return Travel.FORWARD;
+        }
+        if (options.onewayBackward().contains(value)) {
+            return Travel.BACKWARD;
+        }
+        if (!options.onewayBoth().contains(value)) {
+            tally.note("one-way value '" + raw.trim() + "' not recognised, read as two-way");
+        }
+        return Travel.BOTH;
+    }
+
+    private boolean required(Map<String, String> properties) {
+        if (options.requiredField() == null) {
+            return true;
+        }
+        String value = properties.get(options.requiredField());
+        return value != null && TRUE_VALUES.contains(value.trim().toLowerCase(Locale.ROOT));
+    }
+}
