@@ -59,6 +59,9 @@ public final class PlanCommand implements Callable<Integer> {
     @CommandLine.Mixin
     LayerOptions layer;
 
+    @CommandLine.Mixin
+    FieldOutputOptions field;
+
     @CommandLine.Spec
     CommandLine.Model.CommandSpec spec;
 
@@ -68,13 +71,16 @@ public final class PlanCommand implements Callable<Integer> {
         if (!(depotReach >= 0)) {
             throw new CommandLine.ParameterException(spec.commandLine(), "--depot-reach must be 0 or more metres");
         }
+        field.check(spec.commandLine());
         PrintWriter stdout = spec.commandLine().getOut();
         StageClock clock = new StageClock(TerminalProgress.forCommandLine(quiet, System.err));
         Plan plan = Planner.plan(new PlanRequest(input, depot, snap, depotReach, depotOnly, layer.readOptions()), clock);
         if (out != null) {
             clock.run("write", () -> new TourGeoJsonWriter(steps).write(out, plan.network(), plan.tours()));
         }
+        PlanSummary.Section fieldSection = field.write(plan, clock);
         PlanSummary summary = PlanSummary.of(plan, clock.stages(), out);
+        summary.add(fieldSection);
         stdout.print(json ? summary.toJson() : summary.toText());
         stdout.flush();
         return ExitCode.OK;

@@ -15,6 +15,7 @@ import org.streetcomb.network.StreetNetwork;
 import org.streetcomb.plan.Plan;
 import org.streetcomb.plan.StageClock;
 import org.streetcomb.tour.Tour;
+import org.streetcomb.write.FieldCaution;
 
 /**
  * The summary of a plan, built once and printed as text or as JSON, so both carry the same numbers.
@@ -23,8 +24,7 @@ import org.streetcomb.tour.Tour;
 final class PlanSummary {
 
     private static final ObjectMapper MAPPER = new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT);
-    static final String CAUTION = "Plans are advice: obey traffic law and signs, never handle a device while driving, "
-            + "follow local rules and your own risk assessment; map data may be out of date.";
+    static final String CAUTION = FieldCaution.TEXT;
 
     /** Tours listed one per line in the text summary; --json lists all. */
     private static final int TOURS_LISTED = 10;
@@ -136,7 +136,6 @@ final class PlanSummary {
         if (out != null) {
             line("Written", "%s", out);
         }
-        line("Caution", "%s", CAUTION);
     }
 
     private static String skippedText(Map<String, Integer> skipped) {
@@ -160,8 +159,23 @@ final class PlanSummary {
         return BigDecimal.valueOf(whole == 0 ? 0 : part / whole).setScale(6, RoundingMode.HALF_EVEN);
     }
 
+    /**
+     * What a later stage reports: a JSON member, and text lines shown before the caution.
+     *
+     * @param lines label and text of each line
+     */
+    record Section(String key, ObjectNode json, List<String[]> lines) {
+    }
+
+    void add(Section section) {
+        json.set(section.key(), section.json());
+        for (String[] labelled : section.lines()) {
+            line(labelled[0], "%s", labelled[1]);
+        }
+    }
+
     String toText() {
-        return text.toString();
+        return text + String.format(Locale.ROOT, "%-9s %s%n", "Caution", CAUTION);
     }
 
     String toJson() {

@@ -23,6 +23,12 @@ import org.streetcomb.tour.Tour;
 public record Plan(PlanRequest request, ReadReport read, StreetNetwork network, Components components, int depot,
                    double depotDistance, Augmentation augmentation, List<Tour> tours, List<String> warnings) {
 
+    /** The same plan with its tours replaced (reordered, or cut into trips). */
+    public Plan withTours(List<Tour> replaced) {
+        return new Plan(request, read, network, components, depot, depotDistance, augmentation, List.copyOf(replaced),
+                warnings);
+    }
+
     /** Total length of the streets the tours cover, metres. */
     public double serviceLength() {
         return tours.stream().mapToDouble(t -> t.length(network) - t.deadhead(network)).sum();

@@ -1,0 +1,148 @@
+package org.streetcomb.cli;
+
+import com.fasterxml.jackson.databind.node.JsonNodeFactory;
+import com.fasterxml.jackson.databind.node.ObjectNode;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+import org.streetcomb.plan.Plan;
+import org.streetcomb.plan.StageClock;
+import org.streetcomb.tour.Direction;
+import org.streetcomb.tour.Directions;
+import org.streetcomb.tour.EdgeBearings;
+import org.streetcomb.tour.Tour;
+import org.streetcomb.tour.TrafficSide;
+import org.streetcomb.tour.TurnCounts;
+import org.streetcomb.write.DirectionSheetWriter;
+import org.streetcomb.write.GpxLimits;
+import org.streetcomb.write.GpxTourWriter;
+import org.streetcomb.write.KmlTourWriter;
+import picocli.CommandLine;
+import picocli.CommandLine.Option;
+
+/**
+ * The plan options for taking tours to the field: GPX and KML files, a direction sheet, and the side of
+ * the road traffic keeps to. A picocli mixin, so {@code plan} only wires it in.
+ */
+public final class FieldOutputOptions {
+
+    @Option(names = "--gpx", paramLabel = "FILE", description = "Write the tours as GPX 1.1 for handheld units.")
+    Path gpx;
+
+    @Option(names = "--gpx-simplify", paramLabel = "METRES", defaultValue = "2",
+            description = "Simplify GPX and KML geometry within this many metres (Douglas-Peucker; 0 keeps every "
+                    + "vertex; default: ${DEFAULT-VALUE}).")
+    double simplify;
+
+    @Option(names = "--gpx-track-points", paramLabel = "N", defaultValue = "" + GpxLimits.DEFAULT_TRACK_POINTS,
+            description = "Most points per GPX track; longer tours are split into numbered parts "
+                    + "(default: ${DEFAULT-VALUE}).")
+    int trackPoints;
+
+    @Option(names = "--gpx-route-points", paramLabel = "N", defaultValue = "" + GpxLimits.DEFAULT_ROUTE_POINTS,
+            description = "Most points per GPX route (default: ${DEFAULT-VALUE}).")
+    int routePoints;
+
+    @Option(names = "--gpx-routes", description = "Also write a GPX route per tour with a point at every turn.")
+    boolean routes;
+
+    @Option(names = "--kml", paramLabel = "FILE", description = "Write the tours as KML 2.2 for globe viewers.")
+    Path kml;
+
+    @Option(names = "--directions", paramLabel = "FILE",
+            description = "Write a direction sheet: .csv for a table, .html for a printable page.")
+    Path directions;
+
+    @Option(names = "--traffic-side", paramLabel = "SIDE", defaultValue = "right",
+            converter = TrafficSideConverter.class,
+            description = "The side of the road traffic keeps to: right or left (default: ${DEFAULT-VALUE}). "
+                    + "Decides which turns cross oncoming traffic.")
+    TrafficSide side;
+
+    /** Checks the option values; call before planning so a bad value fails fast. */
+    void check(CommandLine commandLine) {
+        if (!(simplify >= 0) || simplify > 1000) {
+            throw new CommandLine.ParameterException(commandLine, "--gpx-simplify must be 0 to 1000 metres");
+        }
+        if (trackPoints < 2 || routePoints < 2) {
+            throw new CommandLine.ParameterException(commandLine, "--gpx-track-points and --gpx-route-points must be at least 2");
+        }
+        if (directions != null && DirectionSheetWriter.isHtml(directions) == null) {
+            throw new CommandLine.ParameterException(commandLine, "--directions " + directions
+                    + ": name the file .csv or .html");
+        }
+    }
+
+    /** Writes the requested files; returns what was written and the turn counts, for the summary. */
+    PlanSummary.Section write(Plan plan, StageClock clock) {
+        EdgeBearings bearings = clock.time("turns", () -> EdgeBearings.of(plan.network()));
+        List<Tour> tours = plan.tours();
+        List<List<Direction>> sheets = new ArrayList<>();
+        TurnCounts counts = TurnCounts.none();
+        for (Tour tour : tours) {
+            sheets.add(Directions.of(plan.network(), bearings, side, tour));
+            counts = counts.plus(TurnCounts.of(plan.network(), bearings, side, tour));
+        }
+        String label = "Tour";
+        List<String[]> text = new ArrayList<>();
+        ObjectNode json = JsonNodeFactory.instance.objectNode();
+        ObjectNode turns = json.putObject("turns");
+        turns.put("traffic_side", side.name().toLowerCase(Locale.ROOT));
+        turns.put("u_turns", counts.uTurns());
+        turns.put("crossing_turns", counts.crossingTurns());
+        turns.put("straight_ons", counts.straightOns());
+        turns.put("transitions", counts.transitions());
+        turns.put("u_turns_per_100km", round(counts.per100Km(counts.uTurns())));
+        turns.put("crossing_turns_per_100km", round(counts.per100Km(counts.crossingTurns())));
+        turns.put("straight_ons_per_100km", round(counts.per100Km(counts.straightOns())));
+        text.add(new String[] {"Turns", String.format(Locale.ROOT,
+                "%d U-turns, %d crossing turns (%s-hand traffic), %d straight on; per 100 km: %.1f, %.1f, %.1f",
+                counts.uTurns(), counts.crossingTurns(), side.name().toLowerCase(Locale.ROOT), counts.straightOns(),
+                counts.per100Km(counts.uTurns()), counts.per100Km(counts.crossingTurns()),
+                counts.per100Km(counts.straightOns()))});
+        if (gpx != null) {
+            GpxTourWriter.Written written = clock.time("gpx", () -> new GpxTourWriter(
+                    new GpxLimits(simplify, trackPoints, routePoints, routes))
+                    .write(gpx, plan.network(), plan.depot(), tours, sheets, label));
+            ObjectNode node = json.putObject("gpx");
+            node.put("file", gpx.toString());
+            node.put("tracks", written.tracks());
+            node.put("track_points", written.trackPoints());
+            node.put("routes", written.routes());
+            node.put("route_points", written.routePoints());
+            node.put("waypoints", written.waypoints());
+            text.add(new String[] {"GPX", String.format(Locale.ROOT, "%s: %d tracks with %d points%s, %d waypoints",
+                    gpx, written.tracks(), written.trackPoints(), routes ? String.format(Locale.ROOT,
+                    ", %d routes with %d points", written.routes(), written.routePoints()) : "", written.waypoints())});
+        }
+        if (kml != null) {
+            clock.run("kml", () -> new KmlTourWriter(simplify).write(kml, plan.network(), plan.depot(), tours, label));
+            json.put("kml", kml.toString());
+            text.add(new String[] {"KML", kml.toString()});
+        }
+        if (directions != null) {
+            clock.run("directions", () -> DirectionSheetWriter.write(directions, sheets, label));
+            json.put("directions", directions.toString());
+            int lines = sheets.stream().mapToInt(List::size).sum();
+            text.add(new String[] {"Sheet", String.format(Locale.ROOT, "%s: %d lines", directions, lines)});
+        }
+        return new PlanSummary.Section("field", json, text);
+    }
+
+    private static double round(double value) {
+        return Math.round(value * 100) / 100.0;
+    }
+
+    /** Parses "right" or "left". */
+    static final class TrafficSideConverter implements CommandLine.ITypeConverter<TrafficSide> {
+        @Override
+        public TrafficSide convert(String value) {
+            return switch (value.trim().toLowerCase(Locale.ROOT)) {
+                case "right" -> TrafficSide.RIGHT;
+                case "left" -> TrafficSide.LEFT;
+                default -> throw new CommandLine.TypeConversionException("expected right or left; got '" + value + "'");
+            };
+        }
+    }
+}
