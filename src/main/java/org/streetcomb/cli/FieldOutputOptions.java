@@ -13,6 +13,7 @@ import org.streetcomb.tour.Directions;
 import org.streetcomb.tour.EdgeBearings;
 import org.streetcomb.tour.Tour;
 import org.streetcomb.tour.TrafficSide;
+import org.streetcomb.tour.TurnAwareOrder;
 import org.streetcomb.tour.TurnCounts;
 import org.streetcomb.write.DirectionSheetWriter;
 import org.streetcomb.write.GpxLimits;
@@ -22,8 +23,8 @@ import picocli.CommandLine;
 import picocli.CommandLine.Option;
 
 /**
- * The plan options for taking tours to the field: GPX and KML files, a direction sheet, and the side of
- * the road traffic keeps to. A picocli mixin, so {@code plan} only wires it in.
+ * The plan options for taking tours to the field: the turn-aware order, GPX and KML files, a direction
+ * sheet, and the side of the road traffic keeps to. A picocli mixin, so {@code plan} only wires it in.
  */
 public final class FieldOutputOptions {
 
@@ -60,6 +61,14 @@ public final class FieldOutputOptions {
                     + "Decides which turns cross oncoming traffic.")
     TrafficSide side;
 
+    @Option(names = "--plain-order",
+            description = "Keep the tour in the order first found instead of reordering it for fewer U-turns and "
+                    + "crossing turns (the length is the same either way).")
+    boolean plainOrder;
+
+    private EdgeBearings bearings;
+    private TurnCounts plainCounts;
+
     /** Checks the option values; call before planning so a bad value fails fast. */
     void check(CommandLine commandLine) {
         if (!(simplify >= 0) || simplify > 1000) {
@@ -74,16 +83,41 @@ public final class FieldOutputOptions {
         }
     }
 
-    /** Writes the requested files; returns what was written and the turn counts, for the summary. */
-    PlanSummary.Section write(Plan plan, StageClock clock) {
-        EdgeBearings bearings = clock.time("turns", () -> EdgeBearings.of(plan.network()));
-        List<Tour> tours = plan.tours();
-        List<List<Direction>> sheets = new ArrayList<>();
+    /** Reorders the plan's tours for fewer U-turns and crossing turns, unless asked to keep them as found. */
+    Plan arrange(Plan plan, StageClock clock) {
+        return clock.time("turns", () -> {
+            bearings = EdgeBearings.of(plan.network());
+            plainCounts = counts(plan, plan.tours());
+            if (plainOrder) {
+                return plan;
+            }
+            List<Tour> reordered = new ArrayList<>();
+            for (Tour tour : plan.tours()) {
+                reordered.add(TurnAwareOrder.of(plan.network(), bearings, side, tour));
+            }
+            return plan.withTours(reordered);
+        });
+    }
+
+    private TurnCounts counts(Plan plan, List<Tour> tours) {
         TurnCounts counts = TurnCounts.none();
         for (Tour tour : tours) {
-            sheets.add(Directions.of(plan.network(), bearings, side, tour));
             counts = counts.plus(TurnCounts.of(plan.network(), bearings, side, tour));
         }
+        return counts;
+    }
+
+    /**
+     * Writes the requested files for a plan from {@link #arrange}; returns what was written and the turn
+     * counts, for the summary.
+     */
+    PlanSummary.Section write(Plan plan, StageClock clock) {
+        List<Tour> tours = plan.tours();
+        List<List<Direction>> sheets = new ArrayList<>();
+        for (Tour tour : tours) {
+            sheets.add(Directions.of(plan.network(), bearings, side, tour));
+        }
+        TurnCounts counts = counts(plan, tours);
         String label = "Tour";
         List<String[]> text = new ArrayList<>();
         ObjectNode json = JsonNodeFactory.instance.objectNode();
@@ -96,11 +130,20 @@ public final class FieldOutputOptions {
         turns.put("u_turns_per_100km", round(counts.per100Km(counts.uTurns())));
         turns.put("crossing_turns_per_100km", round(counts.per100Km(counts.crossingTurns())));
         turns.put("straight_ons_per_100km", round(counts.per100Km(counts.straightOns())));
+        turns.put("order", plainOrder ? "plain" : "turn-aware");
+        turns.put("plain_order_u_turns", plainCounts.uTurns());
+        turns.put("plain_order_crossing_turns", plainCounts.crossingTurns());
+        turns.put("plain_order_straight_ons", plainCounts.straightOns());
         text.add(new String[] {"Turns", String.format(Locale.ROOT,
                 "%d U-turns, %d crossing turns (%s-hand traffic), %d straight on; per 100 km: %.1f, %.1f, %.1f",
                 counts.uTurns(), counts.crossingTurns(), side.name().toLowerCase(Locale.ROOT), counts.straightOns(),
                 counts.per100Km(counts.uTurns()), counts.per100Km(counts.crossingTurns()),
                 counts.per100Km(counts.straightOns()))});
+        if (!plainOrder) {
+            text.add(new String[] {"", String.format(Locale.ROOT,
+                    "reordered for fewer turns from %d U-turns, %d crossing turns, %d straight on; same length",
+                    plainCounts.uTurns(), plainCounts.crossingTurns(), plainCounts.straightOns())});
+        }
         if (gpx != null) {
             GpxTourWriter.Written written = clock.time("gpx", () -> new GpxTourWriter(
                     new GpxLimits(simplify, trackPoints, routePoints, routes))

@@ -74,7 +74,7 @@ public final class PlanCommand implements Callable<Integer> {
         field.check(spec.commandLine());
         PrintWriter stdout = spec.commandLine().getOut();
         StageClock clock = new StageClock(TerminalProgress.forCommandLine(quiet, System.err));
-        Plan plan = Planner.plan(new PlanRequest(input, depot, snap, depotReach, depotOnly, layer.readOptions()), clock);
+        Plan plan = field.arrange(Planner.plan(new PlanRequest(input, depot, snap, depotReach, depotOnly, layer.readOptions()), clock), clock);
         if (out != null) {
             clock.run("write", () -> new TourGeoJsonWriter(steps).write(out, plan.network(), plan.tours()));
         }

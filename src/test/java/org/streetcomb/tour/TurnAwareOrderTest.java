@@ -1,0 +1,80 @@
+package org.streetcomb.tour;
+
+import static org.junit.jupiter.api.Assertions.assertArrayEquals;
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.nio.file.Path;
+import java.util.Arrays;
+import java.util.List;
+import java.util.stream.Stream;
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.Arguments;
+import org.junit.jupiter.params.provider.MethodSource;
+import org.streetcomb.FieldFixtures;
+import org.streetcomb.network.LonLat;
+import org.streetcomb.network.StreetNetwork;
+import org.streetcomb.plan.Plan;
+
+/**
+ * The turn-aware order against its baseline, the plain Hierholzer order of the same tour, on the demo
+ * town and on a real OpenStreetMap extract (Yongsan, Seoul; fixtures/real, see NOTICE): the same
+ * directed traversals, the same length to the millimetre, a valid tour, never more U-turns, and never
+ * fewer U-turns than the tour's visits to dead ends, where turning back is unavoidable.
+ */
+class TurnAwareOrderTest {
+
+    static Stream<Arguments> layers() {
+        return Stream.of(
+                Arguments.of("demo town", FieldFixtures.DEMO_TOWN, new LonLat(-31.2, 44.6), TrafficSide.RIGHT),
+                Arguments.of("Seoul", Path.of("fixtures/real/roads-seoul.geojson"), null, TrafficSide.RIGHT),
+                Arguments.of("demo town, left-hand traffic", FieldFixtures.DEMO_TOWN, new LonLat(-31.2, 44.6),
+                        TrafficSide.LEFT));
+    }
+
+    @ParameterizedTest(name = "{0}")
+    @MethodSource("layers")
+    void sameTraversalsSameLengthNoMoreUTurns(String name, Path layer, LonLat depot, TrafficSide side) {
+        Plan plan = FieldFixtures.plan(layer, depot);
+        StreetNetwork network = plan.network();
+        EdgeBearings bearings = EdgeBearings.of(network);
+        int[][] edgesOf = plan.components().edgesByComponent(network);
+        TurnCounts before = TurnCounts.none();
+        TurnCounts after = TurnCounts.none();
+        for (Tour plain : plan.tours()) {
+            Tour ordered = TurnAwareOrder.of(network, bearings, side, plain);
+            assertEquals(List.of(), TourValidator.problems(network, ordered, edgesOf[plan.components().of(plain.start())]));
+            assertEquals(plain.start(), ordered.start());
+            assertEquals(Math.round(plain.length(network) * 1000), Math.round(ordered.length(network) * 1000));
+            assertEquals(Math.round(plain.deadhead(network) * 1000), Math.round(ordered.deadhead(network) * 1000));
+            assertArrayEquals(traversals(plain), traversals(ordered), "the same multiset of directed traversals");
+            TurnCounts p = TurnCounts.of(network, bearings, side, plain);
+            TurnCounts o = TurnCounts.of(network, bearings, side, ordered);
+            assertTrue(o.uTurns() <= p.uTurns(), "U-turns " + p.uTurns() + " -> " + o.uTurns());
+            assertTrue(o.uTurns() >= deadEndVisits(network, ordered), "a dead end can only be left by turning back");
+            before = before.plus(p);
+            after = after.plus(o);
+        }
+        assertTrue(after.uTurns() < before.uTurns(), "the reorder should find fewer U-turns on " + name);
+    }
+
+    /** Each traversal as edge, direction and pass, sorted. */
+    private static long[] traversals(Tour tour) {
+        long[] keys = new long[tour.steps()];
+        for (int i = 0; i < keys.length; i++) {
+            keys[i] = 4L * tour.edges()[i] + (tour.forward()[i] ? 2 : 0) + (tour.service()[i] ? 1 : 0);
+        }
+        Arrays.sort(keys);
+        return keys;
+    }
+
+    private static int deadEndVisits(StreetNetwork network, Tour tour) {
+        int visits = 0;
+        for (int i = 0; i + 1 < tour.steps(); i++) {
+            if (network.degree(tour.exit(network, i)) == 1) {
+                visits++;
+            }
+        }
+        return visits;
+    }
+}
