@@ -1,14 +1,16 @@
 package org.streetcomb.network;
 
 /**
- * Dijkstra's shortest-path search over the undirected network, settling one node at a time so callers can
- * stop early (at a target, or after the k nearest nodes of interest). The arrays are allocated once and
+ * Dijkstra's shortest-path search, settling one node at a time so callers can stop early (at a target, or
+ * after the k nearest nodes of interest). The {@link Heading} says whether one-way streets are ignored,
+ * followed away from the source, or followed towards it (distances to the source). The arrays are allocated once and
  * reset lazily with a search stamp, so many short searches on a large network cost only what they touch.
  * O((V + E) log E) per full search; not thread-safe (use one instance per thread).
  */
 public final class DijkstraSearch {
 
     private final StreetNetwork network;
+    private final Heading heading;
     private final double[] distance;
     private final int[] parentEdge;
     private final int[] reached;
@@ -17,8 +19,14 @@ public final class DijkstraSearch {
     private int stamp;
     private int source = -1;
 
+    /** A search that ignores one-way restrictions. */
     public DijkstraSearch(StreetNetwork network) {
+        this(network, Heading.ANY);
+    }
+
+    public DijkstraSearch(StreetNetwork network, Heading heading) {
         this.network = network;
+        this.heading = heading;
         int n = network.nodeCount();
         this.distance = new double[n];
         this.parentEdge = new int[n];
@@ -49,6 +57,9 @@ public final class DijkstraSearch {
             settled[v] = stamp;
             for (int i = network.incidenceStart(v); i < network.incidenceEnd(v); i++) {
                 int e = network.incidentEdge(i);
+                if (!heading.allows(network, e, v)) {
+                    continue;
+                }
                 int w = network.other(e, v);
                 double dw = d + network.length(e);
                 if (reached[w] != stamp || dw < distance[w]) {
@@ -81,15 +92,24 @@ public final class DijkstraSearch {
         return distance[node];
     }
 
-    /** Edges of the shortest path from the source to a settled node, in order from the source. */
+    /**
+     * Edges of the shortest path between the source and a settled node, in driving order: from the source
+     * for {@link Heading#ANY} and {@link Heading#OUTBOUND}, from the node to the source for
+     * {@link Heading#INBOUND}.
+     */
     public int[] pathTo(int node) {
         int count = 0;
         for (int v = node; v != source; v = network.other(parentEdge[v], v)) {
             count++;
         }
         int[] path = new int[count];
+        int i = heading == Heading.INBOUND ? 0 : count;
         for (int v = node; v != source; v = network.other(parentEdge[v], v)) {
-            path[--count] = parentEdge[v];
+            if (heading == Heading.INBOUND) {
+                path[i++] = parentEdge[v];
+            } else {
+                path[--i] = parentEdge[v];
+            }
         }
         return path;
     }

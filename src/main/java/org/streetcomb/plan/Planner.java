@@ -13,9 +13,10 @@ import org.streetcomb.network.StreetNetwork;
 import org.streetcomb.read.LayerReaders;
 import org.streetcomb.read.RoadFeature;
 import org.streetcomb.read.RoadLayer;
-import org.streetcomb.read.Travel;
 import org.streetcomb.solve.Augmentation;
-import org.streetcomb.solve.UndirectedPostman;
+import org.streetcomb.solve.PostmanProblem;
+import org.streetcomb.solve.PostmanVariants;
+import org.streetcomb.solve.ReachabilityCheck;
 import org.streetcomb.tour.Tour;
 import org.streetcomb.tour.TourPlanner;
 
@@ -28,12 +29,7 @@ public final class Planner {
     public static Plan plan(PlanRequest request, StageClock clock) {
         RoadLayer layer = clock.time("read", () -> LayerReaders.read(request.input(), request.readOptions()));
         List<String> warnings = new ArrayList<>();
-        long oneWay = layer.features().stream().filter(f -> f.travel().oneWay()).count();
-        if (oneWay > 0) {
-            warnings.add(oneWay + " one-way street lines are planned as two-way: one-way restrictions are not applied yet");
-        }
-        List<RoadFeature> lines = oneWay > 0 ? twoWay(layer.features()) : layer.features();
-        StreetNetwork network = clock.time("network", () -> new NetworkBuilder(request.snapTolerance()).build(lines));
+        StreetNetwork network = clock.time("network", () -> new NetworkBuilder(request.snapTolerance()).build(layer.features()));
         if (network.edgeCount() == 0) {
             throw new NoTourError(request.input() + ": no street of positive length after noding");
         }
@@ -54,20 +50,12 @@ public final class Planner {
                     : String.format(Locale.ROOT, "the network has %d separate parts: one tour is planned for each",
                       components.count()));
         }
-        Augmentation augmentation = clock.time("solve", () -> UndirectedPostman.solve(network));
-        if (!augmentation.certified()) {
-            warnings.add("the pairing of odd nodes could not be proved optimal on this network (see docs/method.md)");
-        }
-        List<Tour> tours = clock.time("order", () ->
-                TourPlanner.tours(network, components, augmentation, depot.node(), request.depotOnly()));
+        PostmanProblem problem = PostmanSetup.problem(request, network, components, depot.node());
+        ReachabilityCheck.check(problem, request.input().getFileName().toString());
+        Augmentation augmentation = clock.time("solve", () -> PostmanVariants.solve(problem));
+        List<Tour> tours = clock.time("order", () -> TourPlanner.tours(problem, components, augmentation));
         return new Plan(request, layer.report(), network, components, depot.node(),
                 request.depot() != null ? depot.distance() : 0, augmentation, tours, List.copyOf(warnings));
-    }
-
-    /** The lines with every one-way street opened to both directions, for the undirected solver. */
-    private static List<RoadFeature> twoWay(List<RoadFeature> features) {
-        return features.stream().map(f -> f.travel().oneWay()
-                ? new RoadFeature(f.id(), f.name(), f.line(), Travel.BOTH, f.required(), f.properties()) : f).toList();
     }
 
     private static LonLat firstPoint(RoadFeature feature) {

@@ -1,13 +1,15 @@
 package org.streetcomb.solve;
 
 /**
- * The deadhead a solver adds to make a network traversable in one closed walk per component.
+ * A solver's answer: how often each edge is driven, and what is known about its quality.
  *
- * @param copies      for each edge, how many extra (deadhead) traversals it gets
- * @param deadhead    total length of the extra traversals, metres
- * @param oddNodes    odd-degree nodes of the network before augmentation
+ * @param traversals  times each edge is driven (service and deadhead)
+ * @param deadhead    total length driven beyond the service passes, metres
+ * @param oddNodes    odd-degree nodes of the network, for the summary
  * @param method      the method that ran, for the summary
- * @param certified   whether the augmentation was proved minimal
+ * @param certified   whether the solution was proved minimal
+ * @param lowerBound  a proven lower bound on the total driven length of any solution, metres
  */
-public record Augmentation(int[] copies, double deadhead, int oddNodes, String method, boolean certified) {
+public record Augmentation(Traversals traversals, double deadhead, int oddNodes, String method, boolean certified,
+                           double lowerBound) {
 }

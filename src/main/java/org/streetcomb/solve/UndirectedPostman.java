@@ -9,7 +9,11 @@ import org.streetcomb.network.StreetNetwork;
  * the odd-degree nodes at minimum total shortest-path distance ({@link OddVertexMatching}) and add one
  * deadhead copy of every edge on each pair's shortest path. Every node is then even, so each connected
  * component has an Euler circuit of minimum length. If two paths share an edge, both copies are dropped:
- * parity is kept, the original edge still connects, and the tour gets shorter.
+ * parity is kept, the original edge still connects, and the tour gets shorter. For an open route the
+ * start and end nodes swap parity first, so the walk ends at the end node (semi-Eulerian case).
+ *
+ * <p>Exact when every edge of each planned part is to be serviced once and no street is one-way; the
+ * rural variant ({@link UndirectedRuralPostman}) reuses the matching step.
  */
 public final class UndirectedPostman {
 
@@ -19,8 +23,36 @@ public final class UndirectedPostman {
     private UndirectedPostman() {
     }
 
+    /** Every edge of a network without one-way streets, closed tours. */
     public static Augmentation solve(StreetNetwork network) {
-        int[] odd = oddNodes(network);
+        return solve(new PostmanProblem(network, ServiceDemand.everyEdge(network), new int[0], -1));
+    }
+
+    public static Augmentation solve(PostmanProblem problem) {
+        StreetNetwork network = problem.network();
+        int[] either = problem.demand().either().clone();
+        Matched matched = addMatching(problem, either);
+        double deadhead = matched.cost;
+        String method = "undirected postman, exact (Edmonds-Johnson; " + matched.describe() + ")";
+        double total = problem.demand().length(network) + deadhead;
+        return new Augmentation(Traversals.undirected(either), deadhead, oddNodes(network).length, method, true, total);
+    }
+
+    /** The result of pairing odd nodes: its cost in metres and how the matching went. */
+    record Matched(double cost, OddVertexMatching.Result result) {
+        String describe() {
+            return "Blossom V on " + result.candidateEdges() + " candidate pairs, " + result.rounds() + " round"
+                    + (result.rounds() == 1 ? "" : "s");
+        }
+    }
+
+    /**
+     * Makes the multigraph of {@code either} traversals even (apart from an open route's ends) by adding
+     * the shortest paths of a minimum-cost pairing of its odd nodes; updates {@code either} in place.
+     */
+    static Matched addMatching(PostmanProblem problem, int[] either) {
+        StreetNetwork network = problem.network();
+        int[] odd = oddNodes(network, either, problem);
         OddVertexMatching.Result matching = OddVertexMatching.solve(network, odd, NEIGHBOURS);
         int[] copies = new int[network.edgeCount()];
         DijkstraSearch search = new DijkstraSearch(network);
@@ -32,15 +64,25 @@ public final class UndirectedPostman {
                 copies[e]++;
             }
         }
-        double deadhead = 0;
+        double cost = 0;
         for (int e = 0; e < copies.length; e++) {
             copies[e] %= 2;
-            deadhead += copies[e] * network.length(e);
+            either[e] += copies[e];
+            cost += copies[e] * network.length(e);
         }
-        String method = "undirected postman, exact (Edmonds-Johnson; Blossom V on "
-                + matching.candidateEdges() + " candidate pairs, " + matching.rounds() + " round"
-                + (matching.rounds() == 1 ? "" : "s") + ")";
-        return new Augmentation(copies, deadhead, odd.length, method, true);
+        return new Matched(cost, matching);
+    }
+
+    /** Nodes of odd degree in the multigraph of the given traversals, parity swapped at open ends. */
+    static int[] oddNodes(StreetNetwork network, int[] either, PostmanProblem problem) {
+        int[] degree = new int[network.nodeCount()];
+        for (int e = 0; e < either.length; e++) {
+            degree[network.from(e)] += either[e];
+            degree[network.to(e)] += either[e];
+        }
+        return IntStream.range(0, network.nodeCount())
+                .filter(v -> (degree[v] + Math.abs(problem.endBalance(v))) % 2 == 1)
+                .toArray();
     }
 
     /** Nodes with an odd number of edge ends, in id order. */

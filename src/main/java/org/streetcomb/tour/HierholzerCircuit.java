@@ -3,65 +3,100 @@ package org.streetcomb.tour;
 import java.util.ArrayList;
 import java.util.List;
 import org.streetcomb.network.StreetNetwork;
+import org.streetcomb.solve.ServiceDemand;
+import org.streetcomb.solve.Traversals;
 
 /**
- * Euler circuits of the connected components of a network in which every edge is taken once plus its
- * deadhead copies, by Hierholzer's algorithm (C. Hierholzer, 1873), iteratively with an explicit stack so
- * a million-edge component does not overflow the call stack. O(E) time and memory.
+ * Euler walks through the traversals a solver chose, by Hierholzer's algorithm (C. Hierholzer, 1873),
+ * iteratively with an explicit stack so a million-edge part does not overflow the call stack. O(E) time
+ * and memory. Undirected traversals need even degree at every node; directed ones need in-degree equal to
+ * out-degree. The first walk may be open: then its start has one surplus (undirected: odd) end and its end
+ * one deficit, and the walk ends there.
  *
- * <p>The first traversal of each street in driving order is marked as its service; the others are
- * deadhead. The input must have even degree at every node once copies are counted (the postman solvers
- * guarantee it); an odd node is a bug and raises {@link IllegalStateException}.
+ * <p>A traversal is marked as service while its edge still has unmet demand in that direction (or in
+ * either direction); the rest are deadhead. The input must satisfy the degree conditions (the solvers
+ * guarantee it); a violation is a bug and raises {@link IllegalStateException}.
  */
 public final class HierholzerCircuit {
+
+    private static final byte ALONG = 0;
+    private static final byte AGAINST = 1;
+    private static final byte EITHER = 2;
 
     private HierholzerCircuit() {
     }
 
     /**
-     * One circuit from each start node, each covering the component of its start; the start nodes must lie
-     * in distinct components.
+     * One walk from each start node, each covering the traversals reachable from its start; the starts
+     * must lie in distinct parts and every traversal must be reachable from one of them.
      *
-     * @param copies  extra traversals per edge
-     * @param starts  the start and end node of each circuit
-     * @param include which edges to traverse (those of the starts' components)
+     * @param end where the first walk ends (its start for a closed walk)
      */
-    public static List<Tour> of(StreetNetwork network, int[] copies, int[] starts, boolean[] include) {
+    public static List<Tour> of(StreetNetwork network, Traversals traversals, ServiceDemand demand, int[] starts,
+                                int end) {
+        boolean directed = traversals.isDirected();
         int n = network.nodeCount();
         int m = network.edgeCount();
-        int[] firstInstance = new int[m + 1];
+        int instances = 0;
         for (int e = 0; e < m; e++) {
-            firstInstance[e + 1] = firstInstance[e] + (include[e] ? 1 + copies[e] : 0);
+            instances += traversals.total(e);
         }
-        int instances = firstInstance[m];
         int[] instanceEdge = new int[instances];
+        byte[] instanceKind = new byte[instances];
         int[] nodeStart = new int[n + 1];
+        int[] balance = new int[n];
+        int c = 0;
         for (int e = 0; e < m; e++) {
-            for (int c = firstInstance[e]; c < firstInstance[e + 1]; c++) {
-                instanceEdge[c] = e;
+            int u = network.from(e);
+            int v = network.to(e);
+            c = fill(instanceEdge, instanceKind, c, e, ALONG, traversals.along()[e]);
+            c = fill(instanceEdge, instanceKind, c, e, AGAINST, traversals.against()[e]);
+            c = fill(instanceEdge, instanceKind, c, e, EITHER, traversals.either()[e]);
+            if (directed) {
+                nodeStart[u + 1] += traversals.along()[e];
+                nodeStart[v + 1] += traversals.against()[e];
+                balance[u] += traversals.along()[e] - traversals.against()[e];
+                balance[v] += traversals.against()[e] - traversals.along()[e];
+            } else {
+                if (traversals.along()[e] + traversals.against()[e] > 0) {
+                    throw new IllegalStateException("edge " + e + " has both directed and undirected traversals");
+                }
+                nodeStart[u + 1] += traversals.either()[e];
+                nodeStart[v + 1] += traversals.either()[e];
             }
-            int k = firstInstance[e + 1] - firstInstance[e];
-            nodeStart[network.from(e) + 1] += k;
-            nodeStart[network.to(e) + 1] += k;
+        }
+        int start0 = starts.length > 0 ? starts[0] : -1;
+        for (int v = 0; v < n; v++) {
+            int wanted = start0 == end ? 0 : (v == start0 ? 1 : 0) - (v == end ? 1 : 0);
+            boolean ok = directed ? balance[v] == wanted : Math.floorMod(nodeStart[v + 1], 2) == Math.abs(wanted);
+            if (!ok) {
+                throw new IllegalStateException("node " + v + (directed ? " is unbalanced" : " has odd degree")
+                        + " after augmentation");
+            }
         }
         for (int v = 0; v < n; v++) {
-            if (nodeStart[v + 1] % 2 != 0) {
-                throw new IllegalStateException("node " + v + " has odd degree after augmentation");
-            }
             nodeStart[v + 1] += nodeStart[v];
         }
-        int[] incident = new int[2 * instances];
+        int[] incident = new int[directed ? instances : 2 * instances];
         int[] fill = nodeStart.clone();
-        for (int c = 0; c < instances; c++) {
-            int e = instanceEdge[c];
-            incident[fill[network.from(e)]++] = c;
-            incident[fill[network.to(e)]++] = c;
+        for (int i = 0; i < instances; i++) {
+            int e = instanceEdge[i];
+            if (instanceKind[i] == AGAINST) {
+                incident[fill[network.to(e)]++] = i;
+            } else {
+                incident[fill[network.from(e)]++] = i;
+                if (instanceKind[i] == EITHER) {
+                    incident[fill[network.to(e)]++] = i;
+                }
+            }
         }
         int[] next = nodeStart.clone();
         boolean[] used = new boolean[instances];
         int[] stackNode = new int[instances + 1];
         int[] stackInstance = new int[instances + 1];
-        boolean[] serviced = new boolean[m];
+        int[] dueAlong = demand.along().clone();
+        int[] dueAgainst = demand.against().clone();
+        int[] dueEither = demand.either().clone();
         List<Tour> tours = new ArrayList<>(starts.length);
         int remaining = instances;
         for (int start : starts) {
@@ -78,16 +113,18 @@ public final class HierholzerCircuit {
                     next[v]++;
                 }
                 if (next[v] < nodeStart[v + 1]) {
-                    int c = incident[next[v]++];
-                    used[c] = true;
+                    int i = incident[next[v]++];
+                    used[i] = true;
                     top++;
-                    stackNode[top] = network.other(instanceEdge[c], v);
-                    stackInstance[top] = c;
+                    stackNode[top] = network.other(instanceEdge[i], v);
+                    stackInstance[top] = i;
                 } else {
                     if (top > 0) {
-                        int e = instanceEdge[stackInstance[top]];
+                        int i = stackInstance[top];
+                        int e = instanceEdge[i];
                         reversedEdges[count] = e;
-                        reversedForward[count] = network.from(e) == stackNode[top - 1];
+                        reversedForward[count] = instanceKind[i] == EITHER
+                                ? network.from(e) == stackNode[top - 1] : instanceKind[i] == ALONG;
                         count++;
                     }
                     top--;
@@ -98,16 +135,31 @@ public final class HierholzerCircuit {
             boolean[] forward = new boolean[count];
             boolean[] service = new boolean[count];
             for (int i = 0; i < count; i++) {
-                edges[i] = reversedEdges[count - 1 - i];
+                int e = reversedEdges[count - 1 - i];
+                edges[i] = e;
                 forward[i] = reversedForward[count - 1 - i];
-                service[i] = !serviced[edges[i]];
-                serviced[edges[i]] = true;
+                int[] due = forward[i] ? dueAlong : dueAgainst;
+                if (due[e] > 0) {
+                    due[e]--;
+                    service[i] = true;
+                } else if (dueEither[e] > 0) {
+                    dueEither[e]--;
+                    service[i] = true;
+                }
             }
             tours.add(new Tour(start, edges, forward, service));
         }
         if (remaining != 0) {
-            throw new IllegalStateException(remaining + " traversals outside the start nodes' components");
+            throw new IllegalStateException(remaining + " traversals outside the start nodes' parts");
         }
         return tours;
+    }
+
+    private static int fill(int[] instanceEdge, byte[] instanceKind, int c, int edge, byte kind, int count) {
+        for (int k = 0; k < count; k++) {
+            instanceEdge[c] = edge;
+            instanceKind[c++] = kind;
+        }
+        return c;
     }
 }

@@ -3,10 +3,11 @@ package org.streetcomb.tour;
 import org.streetcomb.network.StreetNetwork;
 
 /**
- * One closed walk through a network: the edges in the order driven, the direction of each traversal, and
- * whether the traversal services the street or is deadhead (travel over a street already serviced).
+ * One walk through a network: the edges in the order driven, the direction of each traversal, and
+ * whether the traversal services the street or is deadhead (travel that services nothing). The walk
+ * starts at {@code start} and ends there, unless the plan asked for an open route.
  *
- * @param start   the node the walk starts and ends at
+ * @param start   the node the walk starts at
  * @param edges   edge ids in driving order
  * @param forward for each step, true when driven in the edge's digitised direction
  * @param service for each step, true when this traversal services the street
@@ -25,6 +26,11 @@ public record Tour(int start, int[] edges, boolean[] forward, boolean[] service)
     /** The node step {@code i} leaves by. */
     public int exit(StreetNetwork network, int i) {
         return forward[i] ? network.to(edges[i]) : network.from(edges[i]);
+    }
+
+    /** The node the walk ends at. */
+    public int end(StreetNetwork network) {
+        return edges.length == 0 ? start : exit(network, edges.length - 1);
     }
 
     public double length(StreetNetwork network) {

@@ -5,25 +5,34 @@ import java.util.List;
 import org.streetcomb.network.Components;
 import org.streetcomb.network.StreetNetwork;
 import org.streetcomb.solve.Augmentation;
+import org.streetcomb.solve.PostmanProblem;
+import org.streetcomb.solve.ServiceDemand;
 
 /**
- * Orders an augmented network into closed tours, one per connected component: the depot's component
- * first, starting at the depot node, then the others from largest to smallest, each starting at its
- * node nearest the depot (where a crew arriving from the depot would join it). Every tour is checked by
- * {@link TourValidator} before it is returned.
+ * Chooses where tours start and orders a solver's traversals into tours, one per part of the network that
+ * has streets to service: the depot's part first, starting at the depot node, then the others from
+ * largest to smallest, each starting at its node nearest the depot (where a crew arriving from the depot
+ * would join it). Every tour is checked by {@link TourValidator} before it is returned.
  */
 public final class TourPlanner {
 
     private TourPlanner() {
     }
 
-    /**
-     * @param depot         the depot node
-     * @param depotOnly     plan only the depot's component
-     */
-    public static List<Tour> tours(StreetNetwork network, Components components, Augmentation augmentation,
-                                   int depot, boolean depotOnly) {
+    /** Start nodes of the tours: the depot, then one node per other part with demand (none if depotOnly). */
+    public static int[] starts(StreetNetwork network, Components components, ServiceDemand demand, int depot,
+                               boolean depotOnly) {
         int count = components.count();
+        boolean[] hasDemand = new boolean[count];
+        for (int e = 0; e < network.edgeCount(); e++) {
+            if (demand.needs(e)) {
+                hasDemand[components.of(network.from(e))] = true;
+            }
+        }
+        int depotComponent = components.of(depot);
+        if (depotOnly) {
+            return new int[] {depot};
+        }
         int[] startOf = new int[count];
         double[] startScore = new double[count];
         Arrays.fill(startOf, -1);
@@ -42,25 +51,29 @@ public final class TourPlanner {
                 startScore[c] = score;
             }
         }
-        int depotComponent = components.of(depot);
-        int[] starts = depotOnly ? new int[] {depot} : new int[count];
-        if (!depotOnly) {
-            starts[0] = depot;
-            int k = 1;
-            for (int c = 0; c < count; c++) {
-                if (c != depotComponent) {
-                    starts[k++] = startOf[c];
-                }
+        int[] starts = new int[count];
+        int k = 0;
+        starts[k++] = depot;
+        for (int c = 0; c < count; c++) {
+            if (c != depotComponent && hasDemand[c]) {
+                starts[k++] = startOf[c];
             }
         }
-        boolean[] include = new boolean[network.edgeCount()];
-        for (int e = 0; e < network.edgeCount(); e++) {
-            include[e] = !depotOnly || components.of(network.from(e)) == depotComponent;
-        }
-        List<Tour> tours = HierholzerCircuit.of(network, augmentation.copies(), starts, include);
+        return Arrays.copyOf(starts, k);
+    }
+
+    /** The tours of a solved problem, in the order of its start nodes, each validated. */
+    public static List<Tour> tours(PostmanProblem problem, Components components, Augmentation augmentation) {
+        StreetNetwork network = problem.network();
+        int[] starts = problem.starts();
+        List<Tour> tours = HierholzerCircuit.of(network, augmentation.traversals(), problem.demand(), starts,
+                problem.end());
         int[][] edgesOf = components.edgesByComponent(network);
-        for (Tour tour : tours) {
-            List<String> problems = TourValidator.problems(network, tour, edgesOf[components.of(tour.start())]);
+        for (int t = 0; t < tours.size(); t++) {
+            Tour tour = tours.get(t);
+            int end = t == 0 ? problem.end() : tour.start();
+            List<String> problems = TourValidator.problems(network, tour, problem.demand(),
+                    edgesOf[components.of(tour.start())], end);
             if (!problems.isEmpty()) {
                 throw new IllegalStateException("invalid tour from node " + tour.start() + ": " + problems);
             }

@@ -41,8 +41,10 @@ class UndirectedPostmanBenchmarkTest {
     void tourLengthEqualsComputedOptimum(String name, Path file, long optimum) {
         var instance = CarplibReader.read(file);
         StreetNetwork network = CarplibNetwork.of(instance);
-        Augmentation augmentation = UndirectedPostman.solve(network);
-        List<Tour> tours = TourPlanner.tours(network, Components.of(network), augmentation, instance.depot() - 1, false);
+        ServiceDemand demand = ServiceDemand.everyEdge(network);
+        PostmanProblem problem = new PostmanProblem(network, demand, new int[] {instance.depot() - 1}, instance.depot() - 1);
+        Augmentation augmentation = UndirectedPostman.solve(problem);
+        List<Tour> tours = TourPlanner.tours(problem, Components.of(network), augmentation);
 
         assertEquals(1, tours.size(), "the benchmark graphs are connected");
         Tour tour = tours.get(0);

@@ -1,0 +1,305 @@
+package org.streetcomb.solve;
+
+import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.List;
+import org.streetcomb.network.DijkstraSearch;
+import org.streetcomb.network.StreetNetwork;
+import org.streetcomb.read.RoadFeature;
+import org.streetcomb.read.Travel;
+
+/**
+ * The mixed postman problem (one-way and two-way streets together; NP-hard, Papadimitriou 1976), also in
+ * its rural form, by Frederickson's MIXED2 scheme (J. ACM 26, 1979) followed by exact re-optimisation and
+ * a local search:
+ * <ol>
+ * <li>for a rural demand, join the groups of streets to service by drivable shortest paths
+ *     ({@link ComponentConnector});</li>
+ * <li>INOUTDEGREE: a minimum-cost flow balances every node, where each two-way street to service may be
+ *     given a direction for free (a zero-cost arc of capacity one each way) and any street may be driven
+ *     again in a permitted direction at its length;</li>
+ * <li>EVENPARITY: the two-way streets the flow left without a direction must form an even graph to be
+ *     oriented along cycles; their odd nodes are paired at minimum cost over two-way streets only
+ *     (Blossom V), and each street on a pairing path either becomes a there-and-back pass or gains one
+ *     undirected pass;</li>
+ * <li>the even remainder is oriented along closed trails, which keeps every node balanced;</li>
+ * <li>with every service pass now directed, the deadhead is re-solved exactly as a directed postman
+ *     problem (never longer), then single service directions are flipped and the flow re-solved while
+ *     that shortens the tour (at most {@link #FLIPS} trials), in the spirit of the improvement
+ *     procedures of Pearn &amp; Liu (Computers &amp; OR 22, 1995).</li>
+ * </ol>
+ * Lower bound: the larger of the undirected relaxation (service plus a minimum-cost pairing of odd nodes,
+ * one-way restrictions ignored) and the INOUTDEGREE flow (service plus the flow's cost, parity relaxed).
+ */
+public final class MixedPostman {
+
+    /** Single-street direction flips tried in the local search, each one flow solve. */
+    static final int FLIPS = 300;
+
+    private MixedPostman() {
+    }
+
+    public static Augmentation solve(PostmanProblem problem) {
+        StreetNetwork network = problem.network();
+        ServiceDemand demand = problem.demand();
+        int m = network.edgeCount();
+        int[] along = demand.along().clone();
+        int[] against = demand.against().clone();
+        String connection = "";
+        if (!PostmanVariants.coversPlannedParts(problem)) {
+            boolean[] serviced = new boolean[m];
+            for (int e = 0; e < m; e++) {
+                serviced[e] = demand.needs(e);
+            }
+            ServiceGroups groups = ServiceGroups.of(problem, serviced);
+            int[][] links = ComponentConnector.connect(network, groups.group, groups.count, true);
+            for (int e = 0; e < m; e++) {
+                along[e] += links[0][e];
+                against[e] += links[1][e];
+            }
+            connection = "spanning tree over " + groups.count + " groups, ";
+        }
+        Oriented oriented = inOutDegree(problem, along, against, demand.either());
+        evenParity(network, oriented);
+        orientAlongTrails(network, oriented);
+        // service directions now fixed: the connecting passes and the flow are re-solved together
+        int[] serviceAlong = along.clone();
+        int[] serviceAgainst = against.clone();
+        for (int e = 0; e < m; e++) {
+            if (demand.either()[e] > 0) {
+                boolean forward = oriented.along[e] >= oriented.against[e];
+                (forward ? serviceAlong : serviceAgainst)[e] += demand.either()[e];
+            }
+        }
+        Traversals best = DirectedPostman.balance(problem, serviceAlong, serviceAgainst);
+        int flips = 0;
+        int tried = 0;
+        for (int e = 0; e < m && tried < FLIPS; e++) {
+            if (demand.either()[e] == 0 || network.from(e) == network.to(e)) {
+                continue;
+            }
+            tried++;
+            int k = demand.either()[e];
+            boolean forward = serviceAlong[e] - along[e] >= k;
+            move(forward ? serviceAlong : serviceAgainst, forward ? serviceAgainst : serviceAlong, e, k);
+            Traversals trial = DirectedPostman.balance(problem, serviceAlong, serviceAgainst);
+            if (trial.length(network) < best.length(network) - 1e-9) {
+                best = trial;
+                flips++;
+            } else {
+                move(forward ? serviceAgainst : serviceAlong, forward ? serviceAlong : serviceAgainst, e, k);
+            }
+        }
+        double service = demand.length(network);
+        double total = best.length(network);
+        double bound = lowerBound(problem);
+        String method = "mixed postman, heuristic (" + connection + "Frederickson's MIXED2 orientation, "
+                + "exact re-balancing by minimum-cost flow, " + flips + " of " + tried + " direction flips kept)";
+        return new Augmentation(best, total - service, UndirectedPostman.oddNodes(network).length, method,
+                total <= bound + 1e-9 * Math.max(1, total), bound);
+    }
+
+    private static void move(int[] from, int[] to, int e, int k) {
+        from[e] -= k;
+        to[e] += k;
+    }
+
+    /** The larger of the undirected relaxation and the INOUTDEGREE flow relaxation, metres. */
+    public static double lowerBound(PostmanProblem problem) {
+        StreetNetwork network = problem.network();
+        ServiceDemand demand = problem.demand();
+        double service = demand.length(network);
+        int[] undirected = new int[network.edgeCount()];
+        for (int e = 0; e < undirected.length; e++) {
+            undirected[e] = demand.passes(e);
+        }
+        double matching = UndirectedPostman.addMatching(problem, undirected).cost();
+        Oriented flow = inOutDegree(problem, demand.along(), demand.against(), demand.either());
+        return service + Math.max(matching, flow.flowCost);
+    }
+
+    /** Traversals under construction: directed passes, passes still without a direction, and the flow cost. */
+    private static final class Oriented {
+        final int[] along;
+        final int[] against;
+        final int[] free;
+        double flowCost;
+
+        Oriented(int[] along, int[] against, int[] free) {
+            this.along = along;
+            this.against = against;
+            this.free = free;
+        }
+    }
+
+    private static Oriented inOutDegree(PostmanProblem problem, int[] along, int[] against, int[] either) {
+        StreetNetwork network = problem.network();
+        int n = network.nodeCount();
+        int m = network.edgeCount();
+        int[] supply = new int[n];
+        for (int e = 0; e < m; e++) {
+            supply[network.to(e)] += along[e] - against[e];
+            supply[network.from(e)] += against[e] - along[e];
+        }
+        for (int v = 0; v < n; v++) {
+            supply[v] += problem.endBalance(v);
+        }
+        MinCostFlow flow = new MinCostFlow(n);
+        int[] deadAlong = new int[m];
+        int[] deadAgainst = new int[m];
+        int[] freeAlong = new int[m];
+        int[] freeAgainst = new int[m];
+        Arrays.fill(freeAlong, -1);
+        Arrays.fill(freeAgainst, -1);
+        for (int e = 0; e < m; e++) {
+            Travel travel = network.travel(e);
+            int u = network.from(e);
+            int v = network.to(e);
+            deadAlong[e] = travel == Travel.BACKWARD ? -1 : flow.addArc(u, v, network.length(e), MinCostFlow.UNBOUNDED);
+            deadAgainst[e] = travel == Travel.FORWARD ? -1 : flow.addArc(v, u, network.length(e), MinCostFlow.UNBOUNDED);
+            if (either[e] > 0 && travel == Travel.BOTH) {
+                freeAlong[e] = flow.addArc(u, v, 0, either[e]);
+                freeAgainst[e] = flow.addArc(v, u, 0, either[e]);
+            }
+        }
+        int[] x = flow.solve(supply);
+        int[] a = along.clone();
+        int[] b = against.clone();
+        int[] free = either.clone();
+        double cost = 0;
+        for (int e = 0; e < m; e++) {
+            int da = deadAlong[e] < 0 ? 0 : x[deadAlong[e]];
+            int db = deadAgainst[e] < 0 ? 0 : x[deadAgainst[e]];
+            a[e] += da;
+            b[e] += db;
+            cost += (da + db) * network.length(e);
+            if (freeAlong[e] >= 0) {
+                int fa = x[freeAlong[e]];
+                int fb = x[freeAgainst[e]];
+                int cancel = Math.min(fa, fb);
+                fa -= cancel;
+                fb -= cancel;
+                a[e] += fa;
+                b[e] += fb;
+                free[e] -= fa + fb;
+            } else if (either[e] > 0) {
+                // a service pass on a one-way street (both-kerbs data) takes its only direction
+                (network.travel(e) == Travel.FORWARD ? a : b)[e] += either[e];
+                free[e] = 0;
+            }
+        }
+        Oriented oriented = new Oriented(a, b, free);
+        oriented.flowCost = cost;
+        return oriented;
+    }
+
+    /** Pairs the odd nodes of the undirected passes over two-way streets and toggles parity along the paths. */
+    private static void evenParity(StreetNetwork network, Oriented oriented) {
+        int n = network.nodeCount();
+        int m = network.edgeCount();
+        int[] degree = new int[n];
+        for (int e = 0; e < m; e++) {
+            degree[network.from(e)] += oriented.free[e];
+            degree[network.to(e)] += oriented.free[e];
+        }
+        int[] odd = java.util.stream.IntStream.range(0, n).filter(v -> degree[v] % 2 == 1).toArray();
+        if (odd.length == 0) {
+            return;
+        }
+        List<Integer> twoWay = new ArrayList<>();
+        for (int e = 0; e < m; e++) {
+            if (network.travel(e) == Travel.BOTH) {
+                twoWay.add(e);
+            }
+        }
+        int k = twoWay.size();
+        int[] from = new int[k];
+        int[] to = new int[k];
+        double[] length = new double[k];
+        List<RoadFeature> features = new ArrayList<>(k);
+        for (int i = 0; i < k; i++) {
+            int e = twoWay.get(i);
+            from[i] = network.from(e);
+            to[i] = network.to(e);
+            length[i] = network.length(e);
+            features.add(network.feature(e));
+        }
+        StreetNetwork sub = StreetNetwork.ofGraph(n, from, to, length, features);
+        OddVertexMatching.Result matching = OddVertexMatching.solve(sub, odd, UndirectedPostman.NEIGHBOURS);
+        int[] toggles = new int[k];
+        DijkstraSearch search = new DijkstraSearch(sub);
+        int[] pairs = matching.pairs();
+        for (int p = 0; p < pairs.length; p += 2) {
+            search.start(pairs[p]);
+            search.runTo(pairs[p + 1]);
+            for (int i : search.pathTo(pairs[p + 1])) {
+                toggles[i] ^= 1;
+            }
+        }
+        for (int i = 0; i < k; i++) {
+            if (toggles[i] == 0) {
+                continue;
+            }
+            int e = twoWay.get(i);
+            if (oriented.free[e] > 0) {
+                // the undirected pass becomes a there-and-back pass
+                oriented.free[e]--;
+                oriented.along[e]++;
+                oriented.against[e]++;
+            } else {
+                oriented.free[e]++;
+            }
+        }
+    }
+
+    /** Gives every undirected pass a direction by walking closed trails through the (even) undirected passes. */
+    private static void orientAlongTrails(StreetNetwork network, Oriented oriented) {
+        int n = network.nodeCount();
+        int m = network.edgeCount();
+        int[] start = new int[n + 1];
+        int instances = 0;
+        for (int e = 0; e < m; e++) {
+            start[network.from(e) + 1] += oriented.free[e];
+            start[network.to(e) + 1] += oriented.free[e];
+            instances += oriented.free[e];
+        }
+        for (int v = 0; v < n; v++) {
+            start[v + 1] += start[v];
+        }
+        int[] incident = new int[2 * instances];
+        int[] edgeOf = new int[instances];
+        int[] fill = start.clone();
+        int c = 0;
+        for (int e = 0; e < m; e++) {
+            for (int k = 0; k < oriented.free[e]; k++) {
+                edgeOf[c] = e;
+                incident[fill[network.from(e)]++] = c;
+                incident[fill[network.to(e)]++] = c;
+                c++;
+            }
+        }
+        boolean[] used = new boolean[instances];
+        int[] next = start.clone();
+        for (int s = 0; s < n; s++) {
+            int v = s;
+            while (true) {
+                while (next[v] < start[v + 1] && used[incident[next[v]]]) {
+                    next[v]++;
+                }
+                if (next[v] == start[v + 1]) {
+                    break;
+                }
+                int i = incident[next[v]++];
+                used[i] = true;
+                int e = edgeOf[i];
+                if (network.from(e) == v) {
+                    oriented.along[e]++;
+                } else {
+                    oriented.against[e]++;
+                }
+                v = network.other(e, v);
+            }
+        }
+        Arrays.fill(oriented.free, 0);
+    }
+}
