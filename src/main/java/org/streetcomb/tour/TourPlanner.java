@@ -7,6 +7,7 @@ import org.streetcomb.network.StreetNetwork;
 import org.streetcomb.solve.Augmentation;
 import org.streetcomb.solve.PostmanProblem;
 import org.streetcomb.solve.ServiceDemand;
+import org.streetcomb.solve.Traversals;
 
 /**
  * Chooses where tours start and orders a solver's traversals into tours, one per part of the network that
@@ -60,6 +61,26 @@ public final class TourPlanner {
             }
         }
         return Arrays.copyOf(starts, k);
+    }
+
+    /** Closed tours driving every street of the network (or of the depot's part) once, from a solver's answer. */
+    public static List<Tour> tours(StreetNetwork network, Components components, Augmentation augmentation,
+                                   int depot, boolean depotOnly) {
+        ServiceDemand demand = ServiceDemand.everyEdge(network);
+        Augmentation used = augmentation;
+        if (depotOnly) {
+            boolean[] keep = new boolean[network.edgeCount()];
+            int[] either = augmentation.traversals().either().clone();
+            for (int e = 0; e < keep.length; e++) {
+                keep[e] = components.of(network.from(e)) == components.of(depot);
+                either[e] = keep[e] ? either[e] : 0;
+            }
+            demand = demand.restrictedTo(keep);
+            used = new Augmentation(Traversals.undirected(either), augmentation.deadhead(), augmentation.oddNodes(),
+                    augmentation.method(), augmentation.certified(), augmentation.lowerBound());
+        }
+        int[] starts = starts(network, components, demand, depot, depotOnly);
+        return tours(new PostmanProblem(network, demand, starts, depot), components, used);
     }
 
     /** The tours of a solved problem, in the order of its start nodes, each validated. */

@@ -18,6 +18,11 @@ public final class TourValidator {
     private TourValidator() {
     }
 
+    /** Problems of a closed tour that must drive each of {@code mustCover} at least once, in any direction. */
+    public static List<String> problems(StreetNetwork network, Tour tour, int[] mustCover) {
+        return problems(network, tour, ServiceDemand.everyEdge(network), mustCover, tour.start());
+    }
+
     /**
      * Problems found, empty when the tour is valid.
      *
@@ -41,9 +46,11 @@ public final class TourValidator {
             problems.add("first step does not leave the start node " + tour.start());
         }
         if (tour.exit(network, steps - 1) != end) {
-            problems.add("last step does not end at node " + end);
+            problems.add(end == tour.start() ? "last step does not return to the start node " + end
+                    : "last step does not end at node " + end);
         }
         int m = network.edgeCount();
+        boolean[] driven = new boolean[m];
         int[] servedAlong = new int[m];
         int[] servedAgainst = new int[m];
         for (int i = 0; i < steps; i++) {
@@ -51,6 +58,7 @@ public final class TourValidator {
             if (i > 0 && tour.exit(network, i - 1) != tour.entry(network, i)) {
                 problems.add("steps " + i + " and " + (i + 1) + " do not share a node");
             }
+            driven[e] = true;
             Travel travel = network.travel(e);
             if (travel.oneWay() && tour.forward()[i] != (travel == Travel.FORWARD)
                     && network.from(e) != network.to(e)) {
@@ -60,9 +68,14 @@ public final class TourValidator {
                 (tour.forward()[i] ? servedAlong : servedAgainst)[e]++;
             }
         }
+        int undriven = 0;
         int unmet = 0;
         int overclaimed = 0;
         for (int e : mustCover) {
+            if (demand.needs(e) && !driven[e]) {
+                undriven++;
+                continue;
+            }
             int along = servedAlong[e];
             int against = servedAgainst[e];
             boolean loop = network.from(e) == network.to(e);
@@ -85,6 +98,9 @@ public final class TourValidator {
                     overclaimed++;
                 }
             }
+        }
+        if (undriven > 0) {
+            problems.add(undriven + " edges to cover are never driven");
         }
         if (unmet > 0) {
             problems.add(unmet + " edges to cover are not serviced as demanded");
