@@ -9,6 +9,7 @@ import org.streetcomb.plan.Plan;
 import org.streetcomb.plan.PlanRequest;
 import org.streetcomb.plan.Planner;
 import org.streetcomb.plan.StageClock;
+import org.streetcomb.report.PlanLayers;
 import org.streetcomb.write.TourGeoJsonWriter;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
@@ -62,6 +63,9 @@ public final class PlanCommand implements Callable<Integer> {
     @CommandLine.Mixin
     FieldOutputOptions field;
 
+    @CommandLine.Mixin
+    ReportOptions report;
+
     @CommandLine.Spec
     CommandLine.Model.CommandSpec spec;
 
@@ -72,6 +76,7 @@ public final class PlanCommand implements Callable<Integer> {
             throw new CommandLine.ParameterException(spec.commandLine(), "--depot-reach must be 0 or more metres");
         }
         field.check(spec.commandLine());
+        report.validate();
         PrintWriter stdout = spec.commandLine().getOut();
         StageClock clock = new StageClock(TerminalProgress.forCommandLine(quiet, System.err));
         Plan plan = field.arrange(Planner.plan(new PlanRequest(input, depot, snap, depotReach, depotOnly, layer.readOptions()), clock), clock);
@@ -81,6 +86,7 @@ public final class PlanCommand implements Callable<Integer> {
         PlanSummary.Section fieldSection = field.write(plan, clock);
         PlanSummary summary = PlanSummary.of(plan, clock.stages(), out);
         summary.add(fieldSection);
+        report.write("Plan: " + input.getFileName(), PlanLayers.of(plan), PlanLayers.groups(plan), summary.json(), clock);
         stdout.print(json ? summary.toJson() : summary.toText());
         stdout.flush();
         return ExitCode.OK;

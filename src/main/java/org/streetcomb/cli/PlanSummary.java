@@ -178,6 +178,11 @@ final class PlanSummary {
         return text + String.format(Locale.ROOT, "%-9s %s%n", "Caution", CAUTION);
     }
 
+    /** The summary tree that {@link #toJson()} prints, for reports that show the same numbers. */
+    ObjectNode json() {
+        return json;
+    }
+
     String toJson() {
         try {
             return MAPPER.writeValueAsString(json) + System.lineSeparator();

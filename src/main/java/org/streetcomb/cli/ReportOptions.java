@@ -1,0 +1,147 @@
+package org.streetcomb.cli;
+
+import com.fasterxml.jackson.databind.JsonNode;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.stream.Collectors;
+import org.streetcomb.plan.StageClock;
+import org.streetcomb.report.HtmlReportWriter;
+import org.streetcomb.report.MapGroup;
+import org.streetcomb.report.MapLayer;
+import org.streetcomb.report.MapReport;
+import org.streetcomb.report.QuickLookPng;
+import picocli.CommandLine;
+import picocli.CommandLine.Model.CommandSpec;
+import picocli.CommandLine.Model.OptionSpec;
+import picocli.CommandLine.Model.PositionalParamSpec;
+import picocli.CommandLine.Option;
+
+/**
+ * The report options any command can mix in: an HTML report with a map (with an optional basemap and a
+ * display tolerance) and a PNG quick look. The command builds its layers and summary; this writes them with the command line it ran
+ * with and the cautions.
+ */
+final class ReportOptions {
+
+    static final List<String> CAUTIONS = List.of(
+            "A plan is advice, not an instruction: obey traffic law and road signs at all times.",
+            "Never handle a phone, tablet or GPS unit while driving; stop safely first.",
+            "Map data may be out of date: streets close, turn bans change and new streets appear.",
+            "Local rules and the operator's own risk assessment come before this plan.");
+
+    @Option(names = "--report", paramLabel = "FILE.html",
+            description = "Write one self-contained HTML page with a map of the result and its summary; it opens "
+                    + "from disk with no network.")
+    Path html;
+
+    @Option(names = "--quicklook", paramLabel = "FILE.png",
+            description = "Write a PNG picture of the same map, of --quicklook-size pixels.")
+    Path png;
+
+    @Option(names = "--quicklook-size", paramLabel = "WIDTHxHEIGHT", defaultValue = "1200x800",
+            description = "Pixel size of the --quicklook picture (default: ${DEFAULT-VALUE}).")
+    String pngSize;
+
+    @Option(names = "--basemap", paramLabel = "URL",
+            description = "Draw web map tiles under the report's map, from an http(s) URL with {z}, {x} and {y}, "
+                    + "e.g. https://tiles.example.org/{z}/{x}/{y}.png. The viewer then needs the network. Default: none.")
+    String basemap;
+
+    @Option(names = "--basemap-credit", paramLabel = "TEXT", defaultValue = "",
+            description = "The attribution the tile provider requires, shown on the map.")
+    String basemapCredit;
+
+    @Option(names = "--display-tolerance", paramLabel = "METRES", defaultValue = "1",
+            description = "Simplify lines on the report's map to within this distance; 0 keeps every vertex "
+                    + "(default: ${DEFAULT-VALUE} m). Figures always use the full geometry.")
+    double displayTolerance;
+
+    @CommandLine.Spec(CommandLine.Spec.Target.MIXEE)
+    CommandSpec command;
+
+    /** Checks the options before any work is done, so a typo fails fast. */
+    void validate() {
+        if (!(displayTolerance >= 0) || displayTolerance > 1000) {
+            throw new CommandLine.ParameterException(command.commandLine(), "--display-tolerance must be 0 to 1000 metres");
+        }
+        pictureSize();
+        if (basemap != null) {
+            try {
+                HtmlReportWriter.tileOrigin(basemap);
+            } catch (IllegalArgumentException e) {
+                throw new CommandLine.ParameterException(command.commandLine(), "--basemap: " + e.getMessage());
+            }
+            if (!(basemap.contains("{z}") && basemap.contains("{x}") && basemap.contains("{y}"))) {
+                throw new CommandLine.ParameterException(command.commandLine(),
+                        "--basemap: the URL needs {z}, {x} and {y} placeholders");
+            }
+        }
+    }
+
+    private int[] pictureSize() {
+        String[] parts = pngSize.split("x");
+        try {
+            int[] size = {Integer.parseInt(parts[0]), Integer.parseInt(parts[1])};
+            if (parts.length == 2 && size[0] >= 200 && size[1] >= 150 && size[0] <= 8000 && size[1] <= 8000) {
+                return size;
+            }
+        } catch (NumberFormatException | ArrayIndexOutOfBoundsException e) {
+            // reported below with the allowed range
+        }
+        throw new CommandLine.ParameterException(command.commandLine(),
+                "--quicklook-size must be WIDTHxHEIGHT from 200x150 to 8000x8000 pixels, e.g. 1200x800; got '" + pngSize + "'");
+    }
+
+    /** Writes the report files asked for; does nothing when none is. */
+    void write(String title, List<MapLayer> layers, List<MapGroup> groups, JsonNode summary, StageClock clock) {
+        if (html == null && png == null) {
+            return;
+        }
+        MapReport report = new MapReport(title, layers, groups, summary, run(), CAUTIONS,
+                basemap == null ? null : new MapReport.Basemap(basemap, basemapCredit), displayTolerance);
+        clock.run("report", () -> {
+            if (html != null) {
+                new HtmlReportWriter().write(html, report);
+            }
+            if (png != null) {
+                int[] size = pictureSize();
+                new QuickLookPng(size[0], size[1]).write(png, report);
+            }
+        });
+    }
+
+    /** The command line, each input file with its size, and every option's value (given or default). */
+    private List<MapReport.Entry> run() {
+        List<MapReport.Entry> run = new ArrayList<>();
+        String args = command.commandLine().getParseResult().originalArgs().stream()
+                .map(ReportOptions::quoted).collect(Collectors.joining(" "));
+        run.add(new MapReport.Entry("Command", command.qualifiedName() + " " + args));
+        for (PositionalParamSpec positional : command.positionalParameters()) {
+            Object value = positional.getValue();
+            if (value instanceof Path path) {
+                run.add(new MapReport.Entry("Input " + positional.paramLabel(), path + sizeOf(path)));
+            }
+        }
+        for (OptionSpec option : command.options()) {
+            if (!option.usageHelp() && !option.versionHelp()) {
+                Object value = option.getValue();
+                run.add(new MapReport.Entry(option.longestName(), value == null ? "(not set)" : String.valueOf(value)));
+            }
+        }
+        return run;
+    }
+
+    private static String sizeOf(Path path) {
+        try {
+            return " (" + Files.size(path) + " bytes)";
+        } catch (java.io.IOException e) {
+            return "";
+        }
+    }
+
+    private static String quoted(String arg) {
+        return arg.matches("[A-Za-z0-9_./,:=+@%-]+") ? arg : "'" + arg.replace("'", "'\\''") + "'";
+    }
+}

@@ -1,0 +1,288 @@
+package org.streetcomb.report;
+
+import java.util.ArrayList;
+import java.util.IdentityHashMap;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import org.streetcomb.network.StreetNetwork;
+import org.streetcomb.plan.Plan;
+import org.streetcomb.read.RoadFeature;
+import org.streetcomb.tour.Tour;
+
+/**
+ * The map layers of a plan: the street network, the service and deadhead passes of each tour, the
+ * direction of travel, step numbers and the depot. Consecutive steps of a tour on the same street with
+ * the same kind of pass are drawn as one run, so a street split at every junction is still one line to
+ * point at, and a large plan stays quick to draw.
+ */
+public final class PlanLayers {
+
+    /** Tour colours, chosen to stay apart from each other, from the deadhead amber and the depot red. */
+    static final String[] TOUR_COLOURS = {"#2b59c3", "#2a9d8f", "#8f3fb5", "#1d7a3a", "#0b6e8a",
+        "#a23b72", "#5c6f1d", "#3d3b8e", "#6b4e16", "#c2185b"};
+    static final String NETWORK_COLOUR = "#9aa39c";
+    static final String DEADHEAD_COLOUR = "#f0a202";
+    static final String ARROW_COLOUR = "#263238";
+    static final String DEPOT_COLOUR = "#d7263d";
+    /** Above this many runs, step labels would hide the map and slow it: the step-number layer is left out. */
+    static final int MAX_STEP_LABELS = 2000;
+    /** Steps shorter than this get no arrow: it would not be readable. */
+    private static final double MIN_ARROW_STEP = 6;
+    private static final double METRES_PER_DEGREE = Math.PI / 180 * 6_371_008.8;
+
+    private final Plan plan;
+    private final StreetNetwork network;
+
+    private PlanLayers(Plan plan) {
+        this.plan = plan;
+        this.network = plan.network();
+    }
+
+    public static List<MapLayer> of(Plan plan) {
+        return new PlanLayers(plan).layers();
+    }
+
+    /** One group per tour, so each tour can be shown alone. */
+    public static List<MapGroup> groups(Plan plan) {
+        List<MapGroup> groups = new ArrayList<>();
+        for (int t = 0; t < plan.tours().size(); t++) {
+            double km = plan.tours().get(t).length(plan.network()) / 1000;
+            groups.add(new MapGroup(groupId(t), String.format(Locale.ROOT, "Tour %d (%.2f km)", t + 1, km), tourColour(t)));
+        }
+        return groups;
+    }
+
+    static String tourColour(int tour) {
+        return TOUR_COLOURS[tour % TOUR_COLOURS.length];
+    }
+
+    private static String groupId(int tour) {
+        return "tour-" + (tour + 1);
+    }
+
+    private List<MapLayer> layers() {
+        List<MapFeature> service = new ArrayList<>();
+        List<MapFeature> deadhead = new ArrayList<>();
+        List<MapFeature> arrows = new ArrayList<>();
+        List<MapFeature> labels = new ArrayList<>();
+        for (int t = 0; t < plan.tours().size(); t++) {
+            Tour tour = plan.tours().get(t);
+            for (Run run : runs(tour)) {
+                MapFeature feature = run.feature(t);
+                (run.service ? service : deadhead).add(feature);
+                labels.add(run.label(t));
+            }
+            arrows.add(new MapFeature(arrows(tour), groupId(t), null, "", Map.of()));
+        }
+        List<MapLayer> layers = new ArrayList<>();
+        layers.add(new MapLayer("streets", "Streets", "every street of the network, as noded",
+                MapLayer.Kind.LINES, MapStyle.solid(NETWORK_COLOUR, 2, 1), true, streets()));
+        layers.add(new MapLayer("service", "Service passes", "streets driven to service them, in the tour's colour",
+                MapLayer.Kind.LINES, MapStyle.solid(TOUR_COLOURS[0], 4, 0.85), true, service));
+        layers.add(new MapLayer("deadhead", "Deadhead passes", "streets driven again without servicing",
+                MapLayer.Kind.LINES, new MapStyle(DEADHEAD_COLOUR, 6, 1, "3 6"), true, deadhead));
+        layers.add(new MapLayer("arrows", "Direction of travel", "one arrow per step, visible when zoomed in",
+                MapLayer.Kind.LINES, MapStyle.solid(ARROW_COLOUR, 1.5, 0.9), true, arrows));
+        if (labels.size() <= MAX_STEP_LABELS) {
+            layers.add(new MapLayer("steps", "Step numbers", "the first step of each run on one street",
+                    MapLayer.Kind.LABELS, MapStyle.solid(ARROW_COLOUR, 1, 1), false, labels));
+        }
+        layers.add(new MapLayer("depot", "Depot and tour starts", "", MapLayer.Kind.POINTS,
+                MapStyle.solid(DEPOT_COLOUR, 16, 1), true, starts()));
+        return layers;
+    }
+
+    private List<MapFeature> streets() {
+        Map<RoadFeature, Integer> index = new IdentityHashMap<>();
+        List<List<double[]>> parts = new ArrayList<>();
+        List<double[]> lengths = new ArrayList<>();
+        List<RoadFeature> order = new ArrayList<>();
+        for (int e = 0; e < network.edgeCount(); e++) {
+            RoadFeature source = network.feature(e);
+            Integer i = index.get(source);
+            if (i == null) {
+                i = order.size();
+                index.put(source, i);
+                order.add(source);
+                parts.add(new ArrayList<>());
+                lengths.add(new double[1]);
+            }
+            parts.get(i).add(edgePoints(e, true));
+            lengths.get(i)[0] += network.length(e);
+        }
+        List<MapFeature> features = new ArrayList<>();
+        for (int i = 0; i < order.size(); i++) {
+            RoadFeature source = order.get(i);
+            Map<String, String> details = new LinkedHashMap<>();
+            details.put("Feature id", source.id());
+            details.put("Length (m)", metres(lengths.get(i)[0]));
+            details.put("Edges", String.valueOf(parts.get(i).size()));
+            features.add(new MapFeature(parts.get(i).toArray(new double[0][]), null, null, streetName(source), details));
+        }
+        return features;
+    }
+
+    private List<MapFeature> starts() {
+        List<MapFeature> starts = new ArrayList<>();
+        for (int t = 0; t < plan.tours().size(); t++) {
+            int node = plan.tours().get(t).start();
+            Map<String, String> details = new LinkedHashMap<>();
+            details.put("Node", String.valueOf(node));
+            details.put("Position", String.format(Locale.ROOT, "%.7f, %.7f", network.lon(node), network.lat(node)));
+            String label = node == plan.depot() ? "Depot, start and end of tour " + (t + 1) : "Start and end of tour " + (t + 1);
+            starts.add(MapFeature.point(network.lon(node), network.lat(node), groupId(t), label, details));
+        }
+        return starts;
+    }
+
+    /** Splits a tour into runs of consecutive steps on one street with one kind of pass. */
+    private List<Run> runs(Tour tour) {
+        List<Run> runs = new ArrayList<>();
+        Run current = null;
+        for (int i = 0; i < tour.steps(); i++) {
+            int e = tour.edges()[i];
+            String street = streetKey(network.feature(e));
+            if (current == null || current.service != tour.service()[i] || !current.street.equals(street)) {
+                current = new Run(street, streetName(network.feature(e)), tour.service()[i], i);
+                runs.add(current);
+            }
+            current.add(tour, i);
+        }
+        return runs;
+    }
+
+    private static String streetKey(RoadFeature feature) {
+        return feature.name().isEmpty() ? "\u0000" + feature.id() : feature.name();
+    }
+
+    private static String streetName(RoadFeature feature) {
+        return feature.name().isEmpty() ? "unnamed street (feature " + feature.id() + ")" : feature.name();
+    }
+
+    /** The edge's polyline in the direction of travel, as lon, lat pairs. */
+    private double[] edgePoints(int e, boolean forward) {
+        int n = network.pointCount(e);
+        double[] points = new double[2 * n];
+        for (int k = 0; k < n; k++) {
+            int i = forward ? k : n - 1 - k;
+            points[2 * k] = network.pointLon(e, i);
+            points[2 * k + 1] = network.pointLat(e, i);
+        }
+        return points;
+    }
+
+    /** A chevron at the middle of each step long enough to carry one, pointing the way the step is driven. */
+    private double[][] arrows(Tour tour) {
+        List<double[]> chevrons = new ArrayList<>();
+        for (int i = 0; i < tour.steps(); i++) {
+            int e = tour.edges()[i];
+            double length = network.length(e);
+            if (length >= MIN_ARROW_STEP) {
+                chevrons.add(chevron(edgePoints(e, tour.forward()[i]), Math.min(20, Math.max(3, length * 0.12))));
+            }
+        }
+        return chevrons.toArray(new double[0][]);
+    }
+
+    /** Two strokes meeting at the point halfway along the line, each {@code size} metres long. */
+    static double[] chevron(double[] line, double size) {
+        double xScale = METRES_PER_DEGREE * Math.cos(Math.toRadians(line[1]));
+        int n = line.length / 2;
+        double total = 0;
+        for (int k = 1; k < n; k++) {
+            total += Math.hypot((line[2 * k] - line[2 * k - 2]) * xScale, (line[2 * k + 1] - line[2 * k - 1]) * METRES_PER_DEGREE);
+        }
+        double half = total / 2;
+        double walked = 0;
+        for (int k = 1; k < n; k++) {
+            double dx = (line[2 * k] - line[2 * k - 2]) * xScale;
+            double dy = (line[2 * k + 1] - line[2 * k - 1]) * METRES_PER_DEGREE;
+            double segment = Math.hypot(dx, dy);
+            if (segment > 0 && (walked + segment >= half || k == n - 1)) {
+                double f = Math.min(1, (half - walked) / segment);
+                double tipX = line[2 * k - 2] * xScale + f * dx;
+                double tipY = line[2 * k - 1] * METRES_PER_DEGREE + f * dy;
+                double ux = dx / segment;
+                double uy = dy / segment;
+                // the strokes run back from the tip at 30 degrees either side of the direction of travel
+                double c = Math.cos(Math.toRadians(30));
+                double s = Math.sin(Math.toRadians(30));
+                double leftX = tipX - size * (ux * c - uy * s);
+                double leftY = tipY - size * (uy * c + ux * s);
+                double rightX = tipX - size * (ux * c + uy * s);
+                double rightY = tipY - size * (uy * c - ux * s);
+                return new double[] {leftX / xScale, leftY / METRES_PER_DEGREE, tipX / xScale, tipY / METRES_PER_DEGREE,
+                    rightX / xScale, rightY / METRES_PER_DEGREE};
+            }
+            walked += segment;
+        }
+        return new double[] {line[0], line[1], line[0], line[1]};
+    }
+
+    private static String metres(double value) {
+        return String.format(Locale.ROOT, "%.1f", value);
+    }
+
+    /** Consecutive steps of one tour on one street with one kind of pass. */
+    private final class Run {
+        final String street;
+        final String name;
+        final boolean service;
+        final int first;
+        int last;
+        double length;
+        final List<Double> points = new ArrayList<>();
+
+        Run(String street, String name, boolean service, int first) {
+            this.street = street;
+            this.name = name;
+            this.service = service;
+            this.first = first;
+        }
+
+        void add(Tour tour, int step) {
+            int e = tour.edges()[step];
+            double[] edge = edgePoints(e, tour.forward()[step]);
+            int skip = points.isEmpty() ? 0 : 2;
+            for (int k = skip; k < edge.length; k++) {
+                points.add(edge[k]);
+            }
+            last = step;
+            length += network.length(e);
+        }
+
+        String steps() {
+            return first == last ? String.valueOf(first + 1) : (first + 1) + "\u2013" + (last + 1);
+        }
+
+        double[] line() {
+            double[] line = new double[points.size()];
+            for (int k = 0; k < line.length; k++) {
+                line[k] = points.get(k);
+            }
+            return line;
+        }
+
+        MapFeature feature(int tour) {
+            double[] line = line();
+            Map<String, String> details = new LinkedHashMap<>();
+            details.put("Tour", String.valueOf(tour + 1));
+            details.put(first == last ? "Step" : "Steps", steps());
+            details.put("Street", name);
+            details.put("Pass", service ? "service" : "deadhead");
+            details.put("Length (m)", metres(length));
+            String label = String.format(Locale.ROOT, "Tour %d, step %s: %s (%s)", tour + 1, steps(), name,
+                    service ? "service" : "deadhead");
+            return new MapFeature(new double[][] {line}, groupId(tour), service ? tourColour(tour) : null, label, details);
+        }
+
+        MapFeature label(int tour) {
+            Map<String, String> details = new LinkedHashMap<>();
+            details.put("Street", name);
+            double[] middle = chevron(line(), 0);
+            return MapFeature.point(middle[2], middle[3], groupId(tour), steps(), details);
+        }
+    }
+}

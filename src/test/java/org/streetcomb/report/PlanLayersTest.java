@@ -1,0 +1,85 @@
+package org.streetcomb.report;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.nio.file.Path;
+import java.util.List;
+import net.sf.geographiclib.Geodesic;
+import org.junit.jupiter.api.Test;
+import org.streetcomb.network.LonLat;
+import org.streetcomb.plan.Plan;
+import org.streetcomb.plan.PlanRequest;
+import org.streetcomb.plan.Planner;
+import org.streetcomb.plan.StageClock;
+
+/** The layers drawn for the demo plan carry every step once, and the lines drawn are as long as the plan says. */
+class PlanLayersTest {
+
+    private static final Plan PLAN = Planner.plan(new PlanRequest(Path.of("fixtures/demo/brackenford.geojson"),
+            new LonLat(-31.2, 44.6), 0.5, 500, false), new StageClock(StageClock.SILENT));
+
+    @Test
+    void serviceAndDeadheadRunsCoverEveryStepOnceInOrder() {
+        List<MapLayer> layers = PlanLayers.of(PLAN);
+        int steps = PLAN.tours().get(0).steps();
+        boolean[] seen = new boolean[steps + 1];
+        for (MapLayer layer : layers) {
+            if (layer.id().equals("service") || layer.id().equals("deadhead")) {
+                for (MapFeature run : layer.features()) {
+                    String range = run.details().getOrDefault("Steps", run.details().get("Step"));
+                    String[] ends = range.split("\u2013");
+                    int first = Integer.parseInt(ends[0]);
+                    int last = Integer.parseInt(ends[ends.length - 1]);
+                    for (int s = first; s <= last; s++) {
+                        assertTrue(!seen[s], "step " + s + " drawn twice");
+                        seen[s] = true;
+                    }
+                    assertEquals(layer.id(), run.details().get("Pass"));
+                }
+            }
+        }
+        for (int s = 1; s <= steps; s++) {
+            assertTrue(seen[s], "step " + s + " not drawn");
+        }
+    }
+
+    @Test
+    void drawnLinesMeasureTheServiceAndDeadheadLengths() {
+        // reference: geodesic lengths on WGS84 from GeographicLib (Karney 2013), summed over the drawn vertices
+        double service = 0;
+        double deadhead = 0;
+        for (MapLayer layer : PlanLayers.of(PLAN)) {
+            for (MapFeature feature : layer.features()) {
+                if (layer.id().equals("service")) {
+                    service += geodesicLength(feature);
+                } else if (layer.id().equals("deadhead")) {
+                    deadhead += geodesicLength(feature);
+                }
+            }
+        }
+        assertEquals(PLAN.serviceLength(), service, 1e-6 * PLAN.serviceLength());
+        assertEquals(PLAN.deadheadLength(), deadhead, 1e-6 * PLAN.serviceLength());
+    }
+
+    @Test
+    void chevronPointsTheWayTheLineRuns() {
+        // a line due east: the tip is at its middle and both strokes lie west of it, one north, one south
+        double[] chevron = PlanLayers.chevron(new double[] {0.0, 0.0, 0.001, 0.0}, 10);
+        assertEquals(0.0005, chevron[2], 1e-12);
+        assertTrue(chevron[0] < chevron[2] && chevron[4] < chevron[2]);
+        assertTrue(chevron[1] * chevron[5] < 0, "the strokes lie either side of the line");
+        double stroke = Geodesic.WGS84.Inverse(chevron[3], chevron[2], chevron[1], chevron[0]).s12;
+        assertEquals(10, stroke, 0.05, "stroke length in metres (spherical frame against the ellipsoid)");
+    }
+
+    private static double geodesicLength(MapFeature feature) {
+        double sum = 0;
+        for (double[] part : feature.parts()) {
+            for (int i = 2; i < part.length; i += 2) {
+                sum += Geodesic.WGS84.Inverse(part[i - 1], part[i - 2], part[i + 1], part[i]).s12;
+            }
+        }
+        return sum;
+    }
+}
