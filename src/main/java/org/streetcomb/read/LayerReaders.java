@@ -30,6 +30,9 @@ public final class LayerReaders {
             }
             return new GeoJsonReader(options);
         }
-        throw InputError.at(file, null, "unknown file type: expected .geojson or .json");
+        if (name.endsWith(".shp") || name.endsWith(".zip")) {
+            return new ShapefileReader(options);
+        }
+        throw InputError.at(file, null, "unknown file type: expected .geojson, .json, .shp or a .zip holding a shapefile");
     }
 }

@@ -1,0 +1,203 @@
+package org.streetcomb.read;
+
+import java.io.IOException;
+import java.io.InputStream;
+import java.nio.ByteBuffer;
+import java.nio.charset.Charset;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.DirectoryStream;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.Comparator;
+import java.util.Locale;
+import java.util.Map;
+import java.util.stream.Stream;
+import org.locationtech.jts.geom.Coordinate;
+import org.locationtech.jts.geom.GeometryFactory;
+import org.locationtech.jts.geom.PrecisionModel;
+import org.opengis.referencing.crs.CoordinateReferenceSystem;
+import org.streetcomb.InputError;
+
+/**
+ * Reads road centrelines from an ESRI shapefile (.shp with its .shx index, .dbf attributes, .prj
+ * coordinate system and optional .cpg encoding), or from a .zip holding one.
+ *
+ * <p>Geometry is streamed by {@link ShpLineReader} and attributes by {@link DbfAttributes}, one record at a
+ * time in step; every part of a PolyLine becomes one road line, transformed to WGS 84 by
+ * {@link Wgs84Transform}. The .shx and .dbf must hold as many records as the .shp. The CRS comes from the
+ * .prj, or from the --crs option, which takes precedence; a layer with neither is refused.
+ */
+final class ShapefileReader implements LayerReader {
+
+    private static final GeometryFactory GEOMETRY = new GeometryFactory(new PrecisionModel(), 4326);
+
+    private final ReadOptions options;
+    private final AttributeMapping mapping;
+
+    ShapefileReader(ReadOptions options) {
+        this.options = options;
+        this.mapping = new AttributeMapping(options);
+    }
+
+    @Override
+    public RoadLayer read(Path file) {
+        if (!ShapefileZip.extension(file.getFileName().toString()).equals(".zip")) {
+            return read(file, file.toString(), file);
+        }
+        Path folder = null;
+        try {
+            folder = Files.createTempDirectory("streetcomb-shp").toRealPath();
+            Path shp = ShapefileZip.unpack(file, folder);
+            return read(shp, file + "!" + folder.relativize(shp), file);
+        } catch (IOException e) {
+            throw InputError.at(file, null, "cannot unpack into a temporary folder: " + e.getMessage());
+        } finally {
+            deleteQuietly(folder);
+        }
+    }
+
+    private RoadLayer read(Path shp, String label, Path source) {
+        Path shx = sidecar(shp, ".shx", label);
+        Path dbf = sidecar(shp, ".dbf", label);
+        Path prj = find(shp, ".prj");
+        Path cpg = find(shp, ".cpg");
+        ReadTally tally = new ReadTally();
+        try (ShpLineReader shapes = new ShpLineReader(shp, label);
+             DbfAttributes attributes = new DbfAttributes(dbf, cpg == null ? null : charset(cpg, label), sibling(label, ".dbf"))) {
+            int indexed = indexedRecords(shx, sibling(label, ".shx"));
+            if (attributes.recordCount() != indexed) {
+                throw InputError.at(sibling(label, ".dbf"), null, "holds " + attributes.recordCount()
+                        + " records but the .shp index (.shx) holds " + indexed + ": the files do not belong together");
+            }
+            Wgs84Transform toWgs84 = Wgs84Transform.to(crs(prj, label), shapes.minX(), shapes.minY(), shapes.maxX(),
+                    shapes.maxY(), options.crs() != null ? "--crs " + options.crs() : sibling(label, ".prj"));
+            for (ShpLineReader.Shape shape; (shape = shapes.next()) != null; ) {
+                if (shape.number() > indexed) {
+                    break;
+                }
+                Map<String, String> properties = attributes.next(tally);
+                tally.feature();
+                if (shape.parts().length == 0) {
+                    tally.skip("null shape");
+                } else if (mapping.keeps(properties, tally)) {
+                    for (double[] xy : shape.parts()) {
+                        addLine(String.valueOf(shape.number()), properties, xy, toWgs84, tally, label, shape.number());
+                    }
+                }
+            }
+            if (shapes.recordsRead() != indexed) {
+                throw InputError.at(label, null, "holds " + shapes.recordsRead() + " records but its index (.shx) holds "
+                        + indexed + ": the files do not belong together");
+            }
+            if (tally.isEmpty()) {
+                throw InputError.at(label, null, "no road lines kept among " + tally.features() + " records (skipped: "
+                        + tally.skippedText() + ")");
+            }
+            return tally.layer(source, toWgs84.description());
+        } catch (IOException e) {
+            throw InputError.at(label, null, "cannot read: " + e.getMessage());
+        }
+    }
+
+    private void addLine(String id, Map<String, String> properties, double[] xy, Wgs84Transform toWgs84,
+                         ReadTally tally, String label, int record) {
+        int n = xy.length / 2;
+        if (n < 2) {
+            tally.skip("line part with fewer than 2 points");
+            return;
+        }
+        toWgs84.transform(xy, n);
+        Coordinate[] coords = new Coordinate[n];
+        for (int i = 0; i < n; i++) {
+            double lon = xy[2 * i];
+            double lat = xy[2 * i + 1];
+            if (!(lon >= -180 && lon <= 180 && lat >= -90 && lat <= 90)) {
+                throw InputError.at(label, "record " + record + ", point " + (i + 1),
+                        "does not transform to a valid longitude/latitude: is the .prj right for this layer?");
+            }
+            coords[i] = new Coordinate(lon, lat);
+        }
+        tally.keep(mapping.road(id, properties, GEOMETRY.createLineString(coords), tally));
+    }
+
+    private CoordinateReferenceSystem crs(Path prj, String label) {
+        if (options.crs() != null) {
+            return Wgs84Transform.fromOption(options.crs());
+        }
+        if (prj == null) {
+            throw InputError.at(label, null, "no .prj file says which coordinate reference system the layer uses: "
+                    + "state it with --crs=EPSG:code (or --crs=FILE holding its WKT)");
+        }
+        try {
+            return Wgs84Transform.fromWkt(Files.readString(prj, StandardCharsets.ISO_8859_1), sibling(label, ".prj"));
+        } catch (IOException e) {
+            throw InputError.at(sibling(label, ".prj"), null, "cannot read: " + e.getMessage());
+        }
+    }
+
+    /** Records in the .shx index: (file length - 100 bytes) / 8, after checking its header. */
+    private static int indexedRecords(Path shx, String label) throws IOException {
+        long size = Files.size(shx);
+        try (InputStream in = Files.newInputStream(shx)) {
+            byte[] head = in.readNBytes(100);
+            if (head.length < 100 || ByteBuffer.wrap(head).getInt(0) != 9994 || (size - 100) % 8 != 0) {
+                throw InputError.at(label, null, "not a valid shapefile index (truncated or not a .shx file)");
+            }
+        }
+        return (int) ((size - 100) / 8);
+    }
+
+    static Charset charset(Path cpg, String label) throws IOException {
+        String name = Files.readString(cpg, StandardCharsets.US_ASCII).strip();
+        String windows = name.replaceAll("^(?i)(ansi|cp)[ _]?", "windows-");
+        for (String candidate : new String[] {name, windows, "windows-" + name}) {
+            if (Charset.isSupported(candidate)) {
+                return Charset.forName(candidate);
+            }
+        }
+        throw InputError.at(sibling(label, ".cpg"), null, "unknown character encoding '" + name + "'");
+    }
+
+    private static Path sidecar(Path shp, String extension, String label) {
+        Path found = find(shp, extension);
+        if (found == null) {
+            throw InputError.at(sibling(label, extension), null, "missing: a shapefile needs its " + extension
+                    + " file beside the .shp, with the same name");
+        }
+        return found;
+    }
+
+    /** The file beside {@code shp} with the same base name and this extension, in any letter case. */
+    private static Path find(Path shp, String extension) {
+        String name = shp.getFileName().toString();
+        String base = name.substring(0, name.length() - 4);
+        Path folder = shp.toAbsolutePath().getParent();
+        try (DirectoryStream<Path> siblings = Files.newDirectoryStream(folder)) {
+            for (Path sibling : siblings) {
+                String other = sibling.getFileName().toString();
+                if (other.length() == name.length() && other.startsWith(base)
+                        && other.substring(base.length()).toLowerCase(Locale.ROOT).equals(extension)) {
+                    return sibling;
+                }
+            }
+        } catch (IOException e) {
+            throw InputError.at(folder, null, "cannot list the folder: " + e.getMessage());
+        }
+        return null;
+    }
+
+    private static String sibling(String label, String extension) {
+        return label.substring(0, label.length() - 4) + extension;
+    }
+
+    private static void deleteQuietly(Path folder) {
+        if (folder == null) {
+            return;
+        }
+        try (Stream<Path> paths = Files.walk(folder)) {
+            paths.sorted(Comparator.reverseOrder()).forEach(p -> p.toFile().delete());
+        } catch (IOException ignored) {
+            // a leftover temporary folder is harmless
+        }
+    }
+}

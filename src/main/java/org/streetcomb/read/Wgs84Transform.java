@@ -1,0 +1,127 @@
+package org.streetcomb.read;
+
+import java.io.IOException;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.Locale;
+import java.util.logging.Level;
+import java.util.logging.Logger;
+import org.apache.sis.geometry.GeneralEnvelope;
+import org.apache.sis.metadata.iso.extent.DefaultGeographicBoundingBox;
+import org.apache.sis.referencing.CRS;
+import org.apache.sis.referencing.CommonCRS;
+import org.apache.sis.referencing.crs.AbstractCRS;
+import org.apache.sis.referencing.cs.AxesConvention;
+import org.opengis.referencing.crs.CoordinateReferenceSystem;
+import org.opengis.referencing.operation.CoordinateOperation;
+import org.opengis.referencing.operation.MathTransform;
+import org.opengis.referencing.operation.TransformException;
+import org.opengis.util.FactoryException;
+import org.streetcomb.InputError;
+
+/**
+ * Transforms a layer's coordinates to WGS 84 longitude/latitude with Apache SIS and the EPSG dataset.
+ *
+ * <p>The operation is chosen by SIS for the layer's extent. When the EPSG data know no datum shift for
+ * the source CRS, SIS falls back on a "ballpark" transformation that can be off by hundreds of metres; so
+ * an operation whose linear accuracy is unknown or worse than {@link #WORST_ACCURACY_METRES} is refused
+ * with a message, never used. ESRI .prj files often name their datum in a way the EPSG data do not
+ * recognise (for instance D_North_American_1927): the user then states the CRS by its EPSG code.
+ */
+final class Wgs84Transform {
+
+    /** Coarser datum shifts are refused: street centrelines would no longer meet GPS tracks or depots. */
+    static final double WORST_ACCURACY_METRES = 25;
+
+    /** SIS logs a notice about its optional data directory on first use; users need not see it. */
+    private static final Logger SIS_LOG = Logger.getLogger("org.apache.sis");
+
+    static {
+        SIS_LOG.setLevel(Level.SEVERE);
+    }
+
+    private final MathTransform transform;
+    private final String description;
+
+    private Wgs84Transform(MathTransform transform, String description) {
+        this.transform = transform;
+        this.description = description;
+    }
+
+    /** The CRS of a .prj file's WKT (OGC or ESRI dialect). */
+    static CoordinateReferenceSystem fromWkt(String wkt, Object file) {
+        try {
+            return CRS.fromWKT(wkt.strip());
+        } catch (FactoryException | RuntimeException e) {
+            throw InputError.at(file, null, "the coordinate reference system does not parse: " + firstLine(e));
+        }
+    }
+
+    /** The CRS the user gave: "EPSG:code" or a file holding WKT. */
+    static CoordinateReferenceSystem fromOption(String crs) {
+        if (crs.toUpperCase(Locale.ROOT).startsWith("EPSG:")) {
+            try {
+                return CRS.forCode(crs.toUpperCase(Locale.ROOT));
+            } catch (FactoryException | RuntimeException e) {
+                throw new InputError("--crs " + crs + ": not a known EPSG code (" + firstLine(e) + ")");
+            }
+        }
+        Path file = Path.of(crs);
+        try {
+            return fromWkt(Files.readString(file, StandardCharsets.UTF_8), file);
+        } catch (IOException e) {
+            throw new InputError("--crs " + crs + ": expected EPSG:code or a readable file holding WKT");
+        }
+    }
+
+    /**
+     * The transformation from {@code source} to WGS 84 longitude/latitude for data within the given
+     * extent (in source coordinates), refused when its accuracy is unknown or coarse.
+     */
+    static Wgs84Transform to(CoordinateReferenceSystem source, double minX, double minY, double maxX, double maxY,
+                             Object file) {
+        CoordinateReferenceSystem eastNorth = AbstractCRS.castOrCopy(source).forConvention(AxesConvention.RIGHT_HANDED);
+        String name = source.getName().getCode();
+        try {
+            DefaultGeographicBoundingBox area = null;
+            if (minX <= maxX && minY <= maxY) {
+                GeneralEnvelope extent = new GeneralEnvelope(eastNorth);
+                extent.setRange(0, minX, maxX);
+                extent.setRange(1, minY, maxY);
+                area = new DefaultGeographicBoundingBox();
+                area.setBounds(extent);
+            }
+            CoordinateOperation op = CRS.findOperation(eastNorth, CommonCRS.WGS84.normalizedGeographic(), area);
+            double accuracy = CRS.getLinearAccuracy(op);
+            if (!(accuracy <= WORST_ACCURACY_METRES)) {
+                throw InputError.at(file, null, String.format(Locale.ROOT, "no accurate datum shift from %s to WGS 84 is "
+                        + "known (best accuracy %s): state the layer's CRS by its EPSG code with --crs=EPSG:code",
+                        name, Double.isNaN(accuracy) ? "unknown" : String.format(Locale.ROOT, "%.0f m", accuracy)));
+            }
+            return new Wgs84Transform(op.getMathTransform(), String.format(Locale.ROOT, "%s, to WGS 84 within %.0f m",
+                    name, accuracy));
+        } catch (FactoryException | TransformException e) {
+            throw InputError.at(file, null, "no transformation from " + name + " to WGS 84: " + firstLine(e));
+        }
+    }
+
+    /** Transforms {@code count} x,y pairs in place to longitude,latitude. */
+    void transform(double[] xy, int count) {
+        try {
+            transform.transform(xy, 0, xy, 0, count);
+        } catch (TransformException e) {
+            throw new InputError("a coordinate lies outside the domain of the layer's projection: " + firstLine(e));
+        }
+    }
+
+    /** The source CRS and the accuracy of the datum shift, for the read report. */
+    String description() {
+        return description;
+    }
+
+    private static String firstLine(Exception e) {
+        String message = e.getMessage();
+        return message == null ? e.getClass().getSimpleName() : message.lines().findFirst().orElse("");
+    }
+}

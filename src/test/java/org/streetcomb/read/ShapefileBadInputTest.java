@@ -1,0 +1,157 @@
+package org.streetcomb.read;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.io.IOException;
+import java.io.PrintWriter;
+import java.io.StringWriter;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.zip.ZipEntry;
+import java.util.zip.ZipOutputStream;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+import org.streetcomb.ExitCode;
+import org.streetcomb.cli.Main;
+
+/**
+ * Broken shapefiles give a one-line error naming the file and what is wrong, exit code 3, no stack trace
+ * and no output file. Each case damages a copy of a real fixture the way the ESRI Shapefile Technical
+ * Description (1998) says a reader must notice: lengths, record counts, shape types.
+ */
+class ShapefileBadInputTest {
+
+    private static final Path MESA = Path.of("fixtures/shapefiles/mesa-az-stateplane-ft");
+    private static final Path AURICH = Path.of("fixtures/shapefiles/aurich-dhdn-gk2");
+
+    @TempDir
+    Path dir;
+
+    private Path copy(Path folder, String base) throws IOException {
+        for (String ext : new String[] {".shp", ".shx", ".dbf", ".prj"}) {
+            Files.copy(folder.resolve(base + ext), dir.resolve(base + ext));
+        }
+        return dir.resolve(base + ".shp");
+    }
+
+    private void assertRefused(Path layer, String expected, String... options) {
+        Path out = dir.resolve("tour.geojson");
+        StringWriter err = new StringWriter();
+        String[] args = new String[3 + options.length];
+        args[0] = "plan";
+        args[1] = layer.toString();
+        args[2] = "--out=" + out;
+        System.arraycopy(options, 0, args, 3, options.length);
+        int code = Main.run(args, new PrintWriter(new StringWriter()), new PrintWriter(err, true));
+        String message = err.toString();
+        assertEquals(ExitCode.BAD_INPUT, code, message);
+        assertEquals(1, message.lines().count(), message);
+        assertTrue(message.contains(expected), () -> "expected '" + expected + "' in: " + message);
+        assertFalse(message.contains("Exception"), message);
+        assertFalse(Files.exists(out));
+    }
+
+    @Test
+    void truncatedShp() throws IOException {
+        Path shp = copy(MESA, "streets");
+        byte[] bytes = Files.readAllBytes(shp);
+        Files.write(shp, java.util.Arrays.copyOf(bytes, bytes.length - 30));
+        assertRefused(shp, "streets.shp: truncated", "--crs=EPSG:2223");
+    }
+
+    @Test
+    void dbfRecordCountDiffers() throws IOException {
+        Path shp = copy(MESA, "streets");
+        Files.copy(AURICH.resolve("roads.dbf"), dir.resolve("streets.dbf"), java.nio.file.StandardCopyOption.REPLACE_EXISTING);
+        assertRefused(shp, "streets.dbf: holds 956 records but the .shp index (.shx) holds 293", "--crs=EPSG:2223");
+    }
+
+    @Test
+    void missingShx() throws IOException {
+        Path shp = copy(MESA, "streets");
+        Files.delete(dir.resolve("streets.shx"));
+        assertRefused(shp, "streets.shx: missing", "--crs=EPSG:2223");
+    }
+
+    @Test
+    void unsupportedShapeType() throws IOException {
+        Path shp = copy(MESA, "streets");
+        byte[] bytes = Files.readAllBytes(shp);
+        bytes[32] = 5; // Polygon, little-endian shape type at byte 32 of the main header
+        Files.write(shp, bytes);
+        assertRefused(shp, "shape type 5 (Polygon) is not a line layer", "--crs=EPSG:2223");
+    }
+
+    @Test
+    void prjThatDoesNotParse() throws IOException {
+        Path shp = copy(MESA, "streets");
+        Files.writeString(dir.resolve("streets.prj"), "PROJCS[\"broken\",GEOGCS[");
+        assertRefused(shp, "streets.prj: the coordinate reference system does not parse");
+    }
+
+    @Test
+    void missingPrjWithoutCrsOption() throws IOException {
+        Path shp = copy(MESA, "streets");
+        Files.delete(dir.resolve("streets.prj"));
+        assertRefused(shp, "no .prj file");
+    }
+
+    @Test
+    void invalidUtf8WhenTheCpgSaysUtf8() throws IOException {
+        Path shp = copy(AURICH, "roads");
+        Files.writeString(dir.resolve("roads.cpg"), "UTF-8");
+        byte[] dbf = Files.readAllBytes(dir.resolve("roads.dbf"));
+        for (int i = 0; i + 1 < dbf.length; i++) {
+            if ((dbf[i] & 0xff) == 0xc3 && (dbf[i + 1] & 0xff) == 0x9f) { // "ß" in UTF-8
+                dbf[i] = (byte) 0xdf; // "ß" in ISO-8859-1: not valid UTF-8 before a space
+                dbf[i + 1] = ' ';
+                break;
+            }
+        }
+        Files.write(dir.resolve("roads.dbf"), dbf);
+        assertRefused(shp, "text is not valid UTF-8");
+    }
+
+    @Test
+    void zipWithoutShp() throws IOException {
+        Path zip = dir.resolve("layer.zip");
+        try (ZipOutputStream out = new ZipOutputStream(Files.newOutputStream(zip))) {
+            entry(out, "readme.txt", "no shapefile here".getBytes(StandardCharsets.UTF_8));
+        }
+        assertRefused(zip, "layer.zip: the archive holds no .shp file");
+    }
+
+    @Test
+    void zipEntryEscapingTheFolder() throws IOException {
+        Path zip = dir.resolve("layer.zip");
+        try (ZipOutputStream out = new ZipOutputStream(Files.newOutputStream(zip))) {
+            entry(out, "../../escaped.shp", Files.readAllBytes(MESA.resolve("streets.shp")));
+        }
+        assertRefused(zip, "entry ../../escaped.shp: the path leads outside");
+        assertFalse(Files.exists(dir.getParent().getParent().resolve("escaped.shp")));
+    }
+
+    @Test
+    void zippedShapefileReads() throws IOException {
+        Path zip = dir.resolve("mesa.zip");
+        try (ZipOutputStream out = new ZipOutputStream(Files.newOutputStream(zip))) {
+            for (String ext : new String[] {".shp", ".shx", ".dbf", ".prj"}) {
+                entry(out, "mesa/streets" + ext, Files.readAllBytes(MESA.resolve("streets" + ext)));
+            }
+        }
+        ReadOptions d = ReadOptions.DEFAULTS;
+        RoadLayer layer = LayerReaders.read(zip, new ReadOptions(d.nameField(), d.onewayField(), d.onewayForward(),
+                d.onewayBackward(), d.onewayBoth(), d.keep(), d.drop(), null, d.mode(), false, false, "EPSG:2223"));
+        // SOURCES.md (measured with ogrinfo): 293 LineStrings
+        assertEquals(293, layer.report().featuresRead());
+    }
+
+    private static void entry(ZipOutputStream out, String name, byte[] bytes) throws IOException {
+        out.putNextEntry(new ZipEntry(name));
+        out.write(bytes);
+        out.closeEntry();
+    }
+}
