@@ -28,7 +28,7 @@ import picocli.CommandLine.Parameters;
                 + "route against local rules and your own risk assessment; map data may be out of date."})
 public final class PlanCommand implements Callable<Integer> {
 
-    @Parameters(index = "0", paramLabel = "LAYER", description = "Road centrelines: GeoJSON (.geojson, .json).")
+    @Parameters(index = "0", paramLabel = "LAYER", description = "Road centrelines: GeoJSON (.geojson, .json) or a shapefile (.shp, or a .zip holding one).")
     Path input;
 
     @Option(names = "--depot", paramLabel = "LON,LAT", converter = LonLatConverter.class,
