@@ -1,5 +1,8 @@
 package org.streetcomb.network;
 
+import java.util.List;
+import org.streetcomb.read.RoadFeature;
+
 /**
  * An equirectangular plane in metres around a centre point, used to node lines and simplify them with a tolerance in
  * metres that is the same east-west and north-south. Over a district (tens of kilometres) its scale
@@ -10,6 +13,20 @@ public record LocalFrame(double lon0, double lat0, double metresPerDegreeLon, do
 
     /** Mean radius of the WGS84 ellipsoid in metres (IUGG R1). */
     private static final double MEAN_RADIUS = 6_371_008.8;
+
+    /** A frame centred on the bounding box of the features. */
+    public static LocalFrame covering(List<RoadFeature> features) {
+        double minLon = Double.POSITIVE_INFINITY, maxLon = Double.NEGATIVE_INFINITY;
+        double minLat = Double.POSITIVE_INFINITY, maxLat = Double.NEGATIVE_INFINITY;
+        for (RoadFeature f : features) {
+            var env = f.line().getEnvelopeInternal();
+            minLon = Math.min(minLon, env.getMinX());
+            maxLon = Math.max(maxLon, env.getMaxX());
+            minLat = Math.min(minLat, env.getMinY());
+            maxLat = Math.max(maxLat, env.getMaxY());
+        }
+        return around((minLon + maxLon) / 2, (minLat + maxLat) / 2);
+    }
 
     public static LocalFrame around(double lon0, double lat0) {
         double perDegree = Math.PI / 180 * MEAN_RADIUS;

@@ -37,7 +37,7 @@ public final class NetworkBuilder {
     }
 
     public StreetNetwork build(List<RoadFeature> features) {
-        LocalFrame frame = frameFor(features);
+        LocalFrame frame = LocalFrame.covering(features);
         List<SegmentString> input = new ArrayList<>(features.size());
         for (int f = 0; f < features.size(); f++) {
             LineString line = features.get(f).line();
@@ -53,19 +53,6 @@ public final class NetworkBuilder {
         @SuppressWarnings("unchecked")
         Collection<SegmentString> pieces = noder.getNodedSubstrings();
         return assemble(pieces, frame, features);
-    }
-
-    private static LocalFrame frameFor(List<RoadFeature> features) {
-        double minLon = Double.POSITIVE_INFINITY, maxLon = Double.NEGATIVE_INFINITY;
-        double minLat = Double.POSITIVE_INFINITY, maxLat = Double.NEGATIVE_INFINITY;
-        for (RoadFeature f : features) {
-            var env = f.line().getEnvelopeInternal();
-            minLon = Math.min(minLon, env.getMinX());
-            maxLon = Math.max(maxLon, env.getMaxX());
-            minLat = Math.min(minLat, env.getMinY());
-            maxLat = Math.max(maxLat, env.getMaxY());
-        }
-        return LocalFrame.around((minLon + maxLon) / 2, (minLat + maxLat) / 2);
     }
 
     private static StreetNetwork assemble(Collection<SegmentString> pieces, LocalFrame frame, List<RoadFeature> features) {

@@ -139,6 +139,11 @@ public final class StreetNetwork {
         return features.get(edgeFeature[edge]);
     }
 
+    /** Index of the edge's source feature in {@link #features()}. */
+    public int featureIndex(int edge) {
+        return edgeFeature[edge];
+    }
+
     public List<RoadFeature> features() {
         return features;
     }

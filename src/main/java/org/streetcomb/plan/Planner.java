@@ -3,15 +3,14 @@ package org.streetcomb.plan;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
-import org.streetcomb.InputError;
 import org.streetcomb.NoTourError;
+import org.streetcomb.check.OneWayTrapCheck;
 import org.streetcomb.network.Components;
-import org.streetcomb.network.LonLat;
+import org.streetcomb.network.DepotPlacement;
 import org.streetcomb.network.NearestNode;
 import org.streetcomb.network.NetworkBuilder;
 import org.streetcomb.network.StreetNetwork;
 import org.streetcomb.read.LayerReaders;
-import org.streetcomb.read.RoadFeature;
 import org.streetcomb.read.RoadLayer;
 import org.streetcomb.solve.Augmentation;
 import org.streetcomb.solve.PostmanProblem;
@@ -34,14 +33,8 @@ public final class Planner {
             throw new NoTourError(request.input() + ": no street of positive length after noding");
         }
         Components components = Components.of(network);
-        LonLat depotPosition = request.depot() != null ? request.depot() : firstPoint(layer.features().get(0));
-        NearestNode.Hit depot = NearestNode.of(network, depotPosition.lon(), depotPosition.lat());
-        if (depot.distance() > request.maxDepotDistance()) {
-            throw new InputError(String.format(Locale.ROOT,
-                    "depot %.7f,%.7f is %.0f m from the nearest street node of %s (limit %.0f m): check the order "
-                    + "longitude,latitude or raise the limit", depotPosition.lon(), depotPosition.lat(), depot.distance(),
-                    request.input().getFileName(), request.maxDepotDistance()));
-        }
+        NearestNode.Hit depot = DepotPlacement.place(network, layer.features(), request.depot(),
+                request.maxDepotDistance(), request.input());
         if (components.count() > 1) {
             warnings.add(request.depotOnly()
                     ? String.format(Locale.ROOT, "the network has %d separate parts: only the depot's part is planned "
@@ -51,15 +44,14 @@ public final class Planner {
                       components.count()));
         }
         PostmanProblem problem = PostmanSetup.problem(request, network, components, depot.node());
-        ReachabilityCheck.check(problem, request.input().getFileName().toString());
+        try {
+            ReachabilityCheck.check(problem, request.input().getFileName().toString());
+        } catch (NoTourError cutOff) {
+            throw OneWayTrapCheck.explain(cutOff, network, request.input());
+        }
         Augmentation augmentation = clock.time("solve", () -> PostmanVariants.solve(problem));
         List<Tour> tours = clock.time("order", () -> TourPlanner.tours(problem, components, augmentation));
         return new Plan(request, layer.report(), network, components, depot.node(),
                 request.depot() != null ? depot.distance() : 0, augmentation, tours, List.copyOf(warnings));
-    }
-
-    private static LonLat firstPoint(RoadFeature feature) {
-        var c = feature.line().getCoordinateN(0);
-        return new LonLat(c.x, c.y);
     }
 }
