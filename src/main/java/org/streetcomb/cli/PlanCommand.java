@@ -66,6 +66,9 @@ public final class PlanCommand implements Callable<Integer> {
     @CommandLine.Mixin
     ReportOptions report;
 
+    @CommandLine.Mixin
+    ServiceMixin service;
+
     @CommandLine.Spec
     CommandLine.Model.CommandSpec spec;
 
@@ -79,7 +82,8 @@ public final class PlanCommand implements Callable<Integer> {
         report.validate();
         PrintWriter stdout = spec.commandLine().getOut();
         StageClock clock = new StageClock(TerminalProgress.forCommandLine(quiet, System.err));
-        Plan plan = field.arrange(Planner.plan(new PlanRequest(input, depot, snap, depotReach, depotOnly, layer.readOptions()), clock), clock);
+        Plan plan = field.arrange(Planner.plan(new PlanRequest(input, depot, snap, depotReach, depotOnly, layer.readOptions(),
+                service.options(spec.commandLine())), clock), clock);
         if (out != null) {
             clock.run("write", () -> new TourGeoJsonWriter(steps).write(out, plan.network(), plan.tours()));
         }

@@ -72,6 +72,8 @@ final class PlanSummary {
         totals.put("service_m", metres(plan.serviceLength()));
         totals.put("deadhead_m", metres(deadhead));
         totals.put("deadhead_share", share(deadhead, tour));
+        totals.put("lower_bound_m", metres(plan.augmentation().lowerBound()));
+        totals.put("gap", share(tour - plan.augmentation().lowerBound(), plan.augmentation().lowerBound()));
         ArrayNode tours = s.json.putArray("tours");
         for (int t = 0; t < plan.tours().size(); t++) {
             Tour tr = plan.tours().get(t);
@@ -112,6 +114,16 @@ final class PlanSummary {
         double deadhead = plan.deadheadLength();
         line("Tour", "%.3f km: service %.3f km, deadhead %.3f km (%.1f %%)", tour / 1000, plan.serviceLength() / 1000,
                 deadhead / 1000, tour == 0 ? 0 : 100 * deadhead / tour);
+        double bound = plan.augmentation().lowerBound();
+        line("Bound", "%.3f km: no tour can be shorter%s", bound / 1000, plan.augmentation().certified()
+                ? "; this one is optimal"
+                : String.format(Locale.ROOT, "; this one is at most %.2f %% longer than the optimum",
+                        bound == 0 ? 0 : 100 * (tour - bound) / bound));
+        Tour first = plan.tours().get(0);
+        if (first.end(network) != first.start()) {
+            int end = first.end(network);
+            line("End", "open route: the depot's tour ends at node %d at %.7f,%.7f", end, network.lon(end), network.lat(end));
+        }
         if (plan.tours().size() > 1) {
             int shown = Math.min(plan.tours().size(), TOURS_LISTED);
             for (int t = 0; t < shown; t++) {

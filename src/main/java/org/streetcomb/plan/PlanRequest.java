@@ -14,9 +14,15 @@ import org.streetcomb.read.ReadOptions;
  * @param maxDepotDistance  the depot may lie at most this many metres from the nearest network node
  * @param depotOnly         plan only the connected component that holds the depot
  * @param readOptions       how to read the layer
+ * @param service           which streets need which passes, and where the depot's tour ends
  */
 public record PlanRequest(Path input, LonLat depot, double snapTolerance, double maxDepotDistance,
-                          boolean depotOnly, ReadOptions readOptions) {
+                          boolean depotOnly, ReadOptions readOptions, ServiceOptions service) {
+
+    public PlanRequest(Path input, LonLat depot, double snapTolerance, double maxDepotDistance, boolean depotOnly,
+                       ReadOptions readOptions) {
+        this(input, depot, snapTolerance, maxDepotDistance, depotOnly, readOptions, ServiceOptions.DEFAULTS);
+    }
 
     public PlanRequest(Path input, LonLat depot, double snapTolerance, double maxDepotDistance, boolean depotOnly) {
         this(input, depot, snapTolerance, maxDepotDistance, depotOnly, ReadOptions.DEFAULTS);

@@ -43,9 +43,11 @@ public final class Planner {
                     : String.format(Locale.ROOT, "the network has %d separate parts: one tour is planned for each",
                       components.count()));
         }
-        PostmanProblem problem = PostmanSetup.problem(request, network, components, depot.node());
+        PostmanProblem asked = PostmanSetup.problem(request, network, components, depot.node(), warnings);
+        PostmanProblem problem;
         try {
-            ReachabilityCheck.check(problem, request.input().getFileName().toString());
+            problem = ReachabilityCheck.check(asked, request.input().getFileName().toString(),
+                    request.service().leaveOutCutOff(), warnings);
         } catch (NoTourError cutOff) {
             throw OneWayTrapCheck.explain(cutOff, network, request.input());
         }

@@ -27,6 +27,15 @@ public final class ReachabilityCheck {
 
     /** Throws {@link NoTourError} naming the streets that cannot be serviced on a drivable tour. */
     public static void check(PostmanProblem problem, String source) {
+        check(problem, source, false, new ArrayList<>());
+    }
+
+    /**
+     * With {@code leaveOut}, returns the problem without the streets that cannot be serviced on a drivable
+     * tour and adds a warning naming them; otherwise throws {@link NoTourError} naming them. Either way it
+     * throws when no street to service is left.
+     */
+    public static PostmanProblem check(PostmanProblem problem, String source, boolean leaveOut, List<String> warnings) {
         StreetNetwork network = problem.network();
         ServiceDemand demand = problem.demand();
         boolean[] fromStart = new boolean[network.nodeCount()];
@@ -39,35 +48,49 @@ public final class ReachabilityCheck {
         }
         Set<String> cannotEnter = new LinkedHashSet<>();
         Set<String> cannotLeave = new LinkedHashSet<>();
+        Set<String> named = new java.util.HashSet<>();
+        int demanded = 0;
+        int cut = 0;
+        boolean[] keep = new boolean[network.edgeCount()];
         for (int e = 0; e < network.edgeCount(); e++) {
             if (!demand.needs(e)) {
                 continue;
             }
+            demanded++;
             int u = network.from(e);
             int v = network.to(e);
             boolean alongOk = Heading.OUTBOUND.allows(network, e, u) && fromStart[u] && toEnd[v];
             boolean againstOk = Heading.OUTBOUND.allows(network, e, v) && fromStart[v] && toEnd[u];
             boolean ok = (demand.along()[e] == 0 || alongOk) && (demand.against()[e] == 0 || againstOk)
                     && (demand.either()[e] == 0 || alongOk || againstOk);
-            if (!ok) {
+            cut += ok ? 0 : 1;
+            keep[e] = ok;
+            if (!ok && named.add(network.feature(e).id())) {
                 String where = String.format(Locale.ROOT, "%s at %.6f,%.6f", network.feature(e).id(),
                         (network.lon(u) + network.lon(v)) / 2, (network.lat(u) + network.lat(v)) / 2);
                 (fromStart[u] || fromStart[v] ? cannotLeave : cannotEnter).add(where);
             }
         }
-        if (cannotEnter.isEmpty() && cannotLeave.isEmpty()) {
-            return;
+        if (cut == 0) {
+            return problem;
         }
         List<String> parts = new ArrayList<>();
         if (!cannotEnter.isEmpty()) {
-            parts.add(cannotEnter.size() + " streets cannot be reached from the start (" + listed(cannotEnter) + ")");
+            parts.add(cannotEnter.size() + " streets (by feature) cannot be reached from the start (" + listed(cannotEnter) + ")");
         }
         if (!cannotLeave.isEmpty()) {
-            parts.add(cannotLeave.size() + " streets cannot be left towards the "
+            parts.add(cannotLeave.size() + " streets (by feature) cannot be left towards the "
                     + (problem.open() ? "end" : "start") + " (" + listed(cannotLeave) + ")");
         }
+        if (leaveOut && cut < demanded) {
+            warnings.add("left out, as one-way streets cut them off: " + String.join("; ", parts));
+            return new PostmanProblem(network, demand.restrictedTo(keep), problem.starts(), problem.end());
+        }
+        String hint = 2 * cut > demanded
+                ? ". Many streets are cut off: the depot or end may itself sit on a one-way street that leads away; "
+                  + "check the one-way streets around it" : ". Check their one-way direction, or leave them out of the plan (--leave-out-cut-off)";
         throw new NoTourError(source + ": one-way streets cut off some streets to service: " + String.join("; ", parts)
-                + ". Check their one-way direction, or leave them out of the plan");
+                + hint);
     }
 
     private static String listed(Set<String> streets) {

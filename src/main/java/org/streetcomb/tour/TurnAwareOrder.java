@@ -45,7 +45,8 @@ public final class TurnAwareOrder {
 
     public static Tour of(StreetNetwork network, EdgeBearings bearings, TrafficSide side, Tour tour) {
         int m = tour.steps();
-        if (m < 3) {
+        if (m < 3 || tour.end(network) != tour.start()) {
+            // the pairing below needs a closed walk; open routes keep the solver's order
             return tour;
         }
         Transitions transitions = new Transitions(network, bearings, side, tour);

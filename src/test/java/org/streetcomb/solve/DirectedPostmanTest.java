@@ -150,7 +150,7 @@ class DirectedPostmanTest {
         StreetNetwork network = g.network();
         NoTourError error = assertThrows(NoTourError.class,
                 () -> plan(network, all(network), KerbMode.ONE_PASS, 0, 0, new Augmentation[1]));
-        assertTrue(error.getMessage().contains("1 streets cannot be left"), error.getMessage());
+        assertTrue(error.getMessage().contains("1 streets (by feature) cannot be left"), error.getMessage());
         assertTrue(error.getMessage().contains("e3 at"), error.getMessage());
     }
 }

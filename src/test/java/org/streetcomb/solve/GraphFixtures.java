@@ -16,7 +16,7 @@ import org.streetcomb.read.RoadFeature;
 import org.streetcomb.read.Travel;
 
 /** Abstract test networks: the directed rural postman file format, and seeded random mixed networks. */
-final class GraphFixtures {
+public final class GraphFixtures {
 
     private static final GeometryFactory GEOMETRY = new GeometryFactory();
 
@@ -24,8 +24,8 @@ final class GraphFixtures {
     }
 
     /** An edge list: from, to (0-based), length, travel, required. */
-    record Graph(int nodes, List<int[]> edges, List<Travel> travel, List<Boolean> required) {
-        StreetNetwork network() {
+    public record Graph(int nodes, List<int[]> edges, List<Travel> travel, List<Boolean> required) {
+        public StreetNetwork network() {
             int m = edges.size();
             int[] from = new int[m];
             int[] to = new int[m];
@@ -46,7 +46,7 @@ final class GraphFixtures {
      * Reads a directed rural postman file of the Campos collection (five header lines, then
      * "tail, head, cost, status" per arc, status 1 = required); see fixtures/benchmarks/drpp.
      */
-    static Graph drpp(Path file) throws IOException {
+    public static Graph drpp(Path file) throws IOException {
         List<String> lines = Files.readAllLines(file);
         int nodes = Integer.parseInt(lines.get(0).trim());
         int arcs = Integer.parseInt(lines.get(2).trim());
@@ -65,7 +65,7 @@ final class GraphFixtures {
      * A seeded random street grid (rows x cols nodes, integer lengths 10..99) with a share of one-way
      * streets, kept strongly connected by drawing one-ways only where the reverse route survives.
      */
-    static Graph mixedGrid(long seed, int rows, int cols, double oneWayShare, double requiredShare) {
+    public static Graph mixedGrid(long seed, int rows, int cols, double oneWayShare, double requiredShare) {
         Random random = new Random(seed);
         Graph g = new Graph(rows * cols, new ArrayList<>(), new ArrayList<>(), new ArrayList<>());
         for (int r = 0; r < rows; r++) {
@@ -87,7 +87,7 @@ final class GraphFixtures {
         return g;
     }
 
-    static boolean stronglyConnected(StreetNetwork network) {
+    public static boolean stronglyConnected(StreetNetwork network) {
         boolean[] out = Reach.of(network, 0, Heading.OUTBOUND);
         boolean[] in = Reach.of(network, 0, Heading.INBOUND);
         for (int v = 0; v < network.nodeCount(); v++) {

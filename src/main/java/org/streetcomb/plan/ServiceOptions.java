@@ -1,0 +1,20 @@
+package org.streetcomb.plan;
+
+import java.nio.file.Path;
+import org.streetcomb.network.LonLat;
+import org.streetcomb.solve.KerbMode;
+
+/**
+ * Which streets need which passes, and where the depot's tour ends.
+ *
+ * @param kerbs      passes per street
+ * @param serviceIds a file of feature ids, one per line, that are the only streets to service; null to use
+ *                   the layer's required flags (all streets unless the layer marks some)
+ * @param end        where the depot's tour ends (an open route), or null to return to the depot
+ * @param leaveOutCutOff leave out, with a warning, streets that one-way streets cut off from the tour's
+ *                   start or end, instead of refusing to plan
+ */
+public record ServiceOptions(KerbMode kerbs, Path serviceIds, LonLat end, boolean leaveOutCutOff) {
+
+    public static final ServiceOptions DEFAULTS = new ServiceOptions(KerbMode.ONE_PASS, null, null, false);
+}
