@@ -61,6 +61,9 @@ public final class PlanCommand implements Callable<Integer> {
     LayerOptions layer;
 
     @CommandLine.Mixin
+    RepairMixin repair;
+
+    @CommandLine.Mixin
     FieldOutputOptions field;
 
     @CommandLine.Mixin
@@ -83,7 +86,7 @@ public final class PlanCommand implements Callable<Integer> {
         PrintWriter stdout = spec.commandLine().getOut();
         StageClock clock = new StageClock(TerminalProgress.forCommandLine(quiet, System.err));
         Plan plan = field.arrange(Planner.plan(new PlanRequest(input, depot, snap, depotReach, depotOnly, layer.readOptions(),
-                service.options(spec.commandLine())), clock), clock);
+                service.options(spec.commandLine())), repair.options(), clock), clock);
         if (out != null) {
             clock.run("write", () -> new TourGeoJsonWriter(steps).write(out, plan.network(), plan.tours()));
         }

@@ -4,7 +4,9 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 import org.streetcomb.NoTourError;
+import org.streetcomb.check.NetworkRepair;
 import org.streetcomb.check.OneWayTrapCheck;
+import org.streetcomb.check.RepairOptions;
 import org.streetcomb.network.Components;
 import org.streetcomb.network.DepotPlacement;
 import org.streetcomb.network.NearestNode;
@@ -26,14 +28,25 @@ public final class Planner {
     }
 
     public static Plan plan(PlanRequest request, StageClock clock) {
+        return plan(request, RepairOptions.NONE, clock);
+    }
+
+    /** Plans after making the repairs asked for; each repair made is listed among the plan's warnings. */
+    public static Plan plan(PlanRequest request, RepairOptions repairs, StageClock clock) {
         RoadLayer layer = clock.time("read", () -> LayerReaders.read(request.input(), request.readOptions()));
         List<String> warnings = new ArrayList<>();
-        StreetNetwork network = clock.time("network", () -> new NetworkBuilder(request.snapTolerance()).build(layer.features()));
+        StreetNetwork built = clock.time("network", () -> new NetworkBuilder(request.snapTolerance()).build(layer.features()));
+        NetworkRepair.Result repaired = repairs.equals(RepairOptions.NONE)
+                ? new NetworkRepair.Result(layer.features(), built, List.of())
+                : clock.time("repair", () -> NetworkRepair.apply(layer.features(), layer.report(), built,
+                        request.snapTolerance(), repairs));
+        repaired.done().forEach(done -> warnings.add("repaired: " + done));
+        StreetNetwork network = repaired.network();
         if (network.edgeCount() == 0) {
             throw new NoTourError(request.input() + ": no street of positive length after noding");
         }
         Components components = Components.of(network);
-        NearestNode.Hit depot = DepotPlacement.place(network, layer.features(), request.depot(),
+        NearestNode.Hit depot = DepotPlacement.place(network, repaired.features(), request.depot(),
                 request.maxDepotDistance(), request.input());
         if (components.count() > 1) {
             warnings.add(request.depotOnly()

@@ -80,6 +80,18 @@ class HealthCommandTest {
     }
 
     @Test
+    void planSummaryListsEveryRepairMade() {
+        StringWriter stdout = new StringWriter();
+        int code = Main.run(new String[] {"plan", "fixtures/check/planted.geojson", "--close-gaps", "2", "--drop-duplicates"},
+                new PrintWriter(stdout), new PrintWriter(new StringWriter()));
+        assertEquals(ExitCode.OK, code);
+        assertTrue(stdout.toString().contains("repaired: closed 1 gap of up to 1.51 m by extending feature undershoot"),
+                stdout.toString());
+        assertTrue(stdout.toString().contains("repaired: dropped 1 duplicate edge (100 m) of feature duplicate"),
+                stdout.toString());
+    }
+
+    @Test
     void unreadableLayerIsBadInputWithoutOutput() {
         Path out = folder.resolve("findings.geojson");
         StringWriter stderr = new StringWriter();
