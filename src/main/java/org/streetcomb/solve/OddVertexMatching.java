@@ -14,7 +14,6 @@ import org.jgrapht.alg.matching.blossom.v5.ObjectiveSense;
 import org.jgrapht.graph.DefaultWeightedEdge;
 import org.jgrapht.graph.SimpleWeightedGraph;
 import org.streetcomb.network.DijkstraSearch;
-import org.streetcomb.network.MinHeap;
 import org.streetcomb.network.StreetNetwork;
 
 /**
@@ -29,9 +28,9 @@ import org.streetcomb.network.StreetNetwork;
  * <em>priced</em> against the complete graph with the matching's dual solution, as in column generation:
  * any pair whose reduced cost is negative is added as a candidate and the matching is solved again.
  * When no such pair is left, the dual is feasible for the complete graph and equals the primal cost, so
- * the matching is optimal there: the result is exact, not a heuristic. Pricing every pair costs a few
- * multi-source Dijkstra searches, O(E log E) each, rather than T searches (see {@link #price}). On street
- * networks a handful of rounds suffice; the candidate set only grows, so the loop ends.
+ * the matching is optimal there: the result is exact, not a heuristic. Pricing all pairs takes local
+ * multi-source searches rather than T full ones ({@link DualPricing}). On street networks two to four
+ * rounds suffice; the candidate set only grows, so the loop ends.
  *
  * <p>Distances are passed to Blossom V in kilometres: it is known to misbehave on badly scaled inputs and
  * treats costs above 1e10 as forbidden.
@@ -52,10 +51,12 @@ public final class OddVertexMatching {
     private final int[] oddIndex;
     /** Candidate pairs keyed by i * T + j (i &lt; j, indices into {@link #odd}), value metres. */
     private final Map<Long, Double> candidates = new HashMap<>();
+    private final DualPricing pricing;
 
     private OddVertexMatching(StreetNetwork network, int[] odd) {
         this.network = network;
         this.odd = odd;
+        this.pricing = new DualPricing(network, odd);
         this.oddIndex = new int[network.nodeCount()];
         Arrays.fill(oddIndex, -1);
         for (int i = 0; i < odd.length; i++) {
@@ -85,10 +86,26 @@ public final class OddVertexMatching {
                 // the candidate graph has no perfect matching: widen it
                 k *= 2;
                 addNearest(k);
-            } else if (price(solution) == 0) {
+            } else if (addViolatedPairs(solution) == 0) {
                 return new Result(solution.pairs, solution.cost, rounds, candidates.size());
             }
         }
+    }
+
+    /** Prices the solution against all pairs and adds the violated ones with their exact distance. */
+    private int addViolatedPairs(Solution solution) {
+        long[] violated = pricing.violatedPairs(solution.potential, solution.blossoms);
+        DijkstraSearch search = new DijkstraSearch(network);
+        int added = 0;
+        for (long key : violated) {
+            int i = (int) (key / odd.length);
+            int j = (int) (key % odd.length);
+            search.start(odd[i]);
+            if (candidates.putIfAbsent(key, search.runTo(odd[j])) == null) {
+                added++;
+            }
+        }
+        return added;
     }
 
     /** Adds, for every odd node, its k nearest odd nodes by network distance as candidate partners. */
@@ -167,231 +184,11 @@ public final class OddVertexMatching {
             for (int i : members) {
                 potential[i] += value;
             }
-            if (members.length > 1) {
+            if (members.length > 1 && value > 0) {
+                // a blossom with a zero dual changes no reduced cost, so pricing need not descend into it
                 blossoms.add(Map.entry(members, value));
             }
         }
         return new Solution(pairs, cost, potential, blossoms);
-    }
-
-    /**
-     * Adds every non-candidate pair with negative reduced cost as a candidate, and returns how many.
-     *
-     * <p>For a laminar family of blossoms the reduced cost of a pair is d(u,v) - P(u) - P(v), where P sums
-     * the node dual and the duals of the blossoms that contain one of the pair but not the other. This is
-     * checked level by level: at the top, P(u) = Y(u) and pairs in different top-level groups (blossom or
-     * single node) are priced by one search that keeps, at every network node, the two best labels from
-     * seeds of distinct groups. Inside each blossom B the same is repeated for its members, with z(B)
-     * taken off their potentials and B's own sub-blossoms as the groups. A search stops once its labels
-     * exceed every member's potential, so the inner searches stay local.
-     */
-    private int price(Solution solution) {
-        Laminar laminar = new Laminar(solution.blossoms, odd.length);
-        GroupSearch search = new GroupSearch();
-        int added = 0;
-        java.util.ArrayDeque<int[]> levels = new java.util.ArrayDeque<>();
-        int[] all = IntStream.range(0, odd.length).toArray();
-        levels.add(new int[] {-1});
-        double[] potential = solution.potential.clone();
-        while (!levels.isEmpty()) {
-            int blossom = levels.poll()[0];
-            int[] members = blossom < 0 ? all : laminar.members(blossom);
-            if (blossom >= 0) {
-                for (int u : members) {
-                    potential[u] -= laminar.value(blossom);
-                }
-            }
-            int depth = blossom < 0 ? 0 : laminar.depth(blossom) + 1;
-            added += search.run(members, potential, u -> laminar.groupAt(u, depth));
-            for (int child : laminar.children(blossom)) {
-                levels.add(new int[] {child});
-            }
-        }
-        return added;
-    }
-
-    /** The blossoms of a dual solution as a tree: for each odd node, the blossoms holding it, outermost first. */
-    private static final class Laminar {
-        private final List<int[]> members = new ArrayList<>();
-        private final List<Double> values = new ArrayList<>();
-        private final List<Integer> depths = new ArrayList<>();
-        private final List<List<Integer>> children = new ArrayList<>();
-        private final List<Integer> roots = new ArrayList<>();
-        private final int[][] chain;
-
-        Laminar(List<Map.Entry<int[], Double>> blossoms, int oddCount) {
-            List<Map.Entry<int[], Double>> sorted = new ArrayList<>(blossoms);
-            sorted.sort((a, b) -> Integer.compare(b.getKey().length, a.getKey().length));
-            List<List<Integer>> chains = new ArrayList<>();
-            for (int u = 0; u < oddCount; u++) {
-                chains.add(new ArrayList<>());
-            }
-            for (Map.Entry<int[], Double> entry : sorted) {
-                int id = members.size();
-                int[] set = entry.getKey();
-                List<Integer> outer = chains.get(set[0]);
-                int parent = outer.isEmpty() ? -1 : outer.get(outer.size() - 1);
-                members.add(set);
-                values.add(entry.getValue());
-                depths.add(parent < 0 ? 0 : depths.get(parent) + 1);
-                children.add(new ArrayList<>());
-                (parent < 0 ? roots : children.get(parent)).add(id);
-                for (int u : set) {
-                    chains.get(u).add(id);
-                }
-            }
-            chain = new int[oddCount][];
-            for (int u = 0; u < oddCount; u++) {
-                chain[u] = chains.get(u).stream().mapToInt(Integer::intValue).toArray();
-            }
-        }
-
-        int[] members(int blossom) {
-            return members.get(blossom);
-        }
-
-        double value(int blossom) {
-            return values.get(blossom);
-        }
-
-        int depth(int blossom) {
-            return depths.get(blossom);
-        }
-
-        List<Integer> children(int blossom) {
-            return blossom < 0 ? roots : children.get(blossom);
-        }
-
-        /** The group of u among the members of a blossom at {@code depth}: a sub-blossom, or u alone. */
-        int groupAt(int u, int depth) {
-            return depth < chain[u].length ? -1 - chain[u][depth] : u;
-        }
-    }
-
-    /**
-     * A Dijkstra search seeded at odd nodes with labels -P(u) that keeps, at every network node, the two
-     * best labels from seeds of distinct groups; then, for every seed v, the best label from another group
-     * is min over u of d(u,v) - P(u), to be compared with P(v). Arrays are reset by stamp, not refilled.
-     */
-    private final class GroupSearch {
-        private final int[] stamp = new int[network.nodeCount()];
-        private final int[] bestGroup = new int[network.nodeCount()];
-        private final int[] bestSeed = new int[network.nodeCount()];
-        private final double[] bestLabel = new double[network.nodeCount()];
-        private final int[] secondGroup = new int[network.nodeCount()];
-        private final int[] secondSeed = new int[network.nodeCount()];
-        private final double[] secondLabel = new double[network.nodeCount()];
-        private final byte[] settled = new byte[network.nodeCount()];
-        private int current;
-
-        int run(int[] members, double[] potential, java.util.function.IntUnaryOperator group) {
-            current++;
-            EntryHeap heap = new EntryHeap();
-            double ceiling = Double.NEGATIVE_INFINITY;
-            for (int u : members) {
-                heap.push(-potential[u], odd[u], u);
-                ceiling = Math.max(ceiling, potential[u]);
-            }
-            ceiling += tolerance(ceiling);
-            while (!heap.isEmpty() && heap.key() <= ceiling) {
-                double label = heap.key();
-                int v = heap.node();
-                int seed = heap.source();
-                heap.pop();
-                if (stamp[v] != current) {
-                    stamp[v] = current;
-                    settled[v] = 0;
-                }
-                int g = group.applyAsInt(seed);
-                if (settled[v] == 2 || (settled[v] == 1 && bestGroup[v] == g)) {
-                    continue;
-                }
-                if (settled[v] == 0) {
-                    bestGroup[v] = g;
-                    bestSeed[v] = seed;
-                    bestLabel[v] = label;
-                } else {
-                    secondGroup[v] = g;
-                    secondSeed[v] = seed;
-                    secondLabel[v] = label;
-                }
-                settled[v]++;
-                for (int a = network.incidenceStart(v); a < network.incidenceEnd(v); a++) {
-                    int e = network.incidentEdge(a);
-                    int w = network.other(e, v);
-                    if (stamp[w] != current || settled[w] < 2) {
-                        heap.push(label + network.length(e), w, seed);
-                    }
-                }
-            }
-            int added = 0;
-            for (int j : members) {
-                int v = odd[j];
-                if (stamp[v] != current) {
-                    continue;
-                }
-                int g = group.applyAsInt(j);
-                int seed;
-                double label;
-                if (settled[v] >= 1 && bestGroup[v] != g) {
-                    seed = bestSeed[v];
-                    label = bestLabel[v];
-                } else if (settled[v] == 2) {
-                    seed = secondSeed[v];
-                    label = secondLabel[v];
-                } else {
-                    continue;
-                }
-                if (label - potential[j] < -tolerance(potential[j])) {
-                    long key = key(seed, j);
-                    if (candidates.putIfAbsent(key, label + potential[seed]) == null) {
-                        added++;
-                    }
-                }
-            }
-            return added;
-        }
-    }
-
-    private static double tolerance(double potential) {
-        return 1e-5 + 1e-9 * Math.abs(potential);
-    }
-
-    /** A heap of (label, node, source) entries for the two-best-seeds search. */
-    private static final class EntryHeap {
-        private final MinHeap heap = new MinHeap();
-        private int[] nodes = new int[1024];
-        private int[] sources = new int[1024];
-        private int size;
-
-        void push(double key, int node, int source) {
-            if (size == nodes.length) {
-                nodes = Arrays.copyOf(nodes, 2 * size);
-                sources = Arrays.copyOf(sources, 2 * size);
-            }
-            nodes[size] = node;
-            sources[size] = source;
-            heap.push(key, size++);
-        }
-
-        boolean isEmpty() {
-            return heap.isEmpty();
-        }
-
-        double key() {
-            return heap.peekKey();
-        }
-
-        int node() {
-            return nodes[heap.peekValue()];
-        }
-
-        int source() {
-            return sources[heap.peekValue()];
-        }
-
-        void pop() {
-            heap.pop();
-        }
     }
 }
