@@ -15,6 +15,8 @@ import org.streetcomb.tour.Tour;
 import org.streetcomb.tour.TrafficSide;
 import org.streetcomb.tour.TurnAwareOrder;
 import org.streetcomb.tour.TurnCounts;
+import org.streetcomb.trip.Trip;
+import org.streetcomb.trip.TripPlanner;
 import org.streetcomb.write.DirectionSheetWriter;
 import org.streetcomb.write.GpxLimits;
 import org.streetcomb.write.GpxTourWriter;
@@ -66,8 +68,12 @@ public final class FieldOutputOptions {
                     + "crossing turns (the length is the same either way).")
     boolean plainOrder;
 
+    @CommandLine.Mixin
+    TripOptions tripOptions;
+
     private EdgeBearings bearings;
     private TurnCounts plainCounts;
+    private TripPlanner.Result trips;
 
     /** Checks the option values; call before planning so a bad value fails fast. */
     void check(CommandLine commandLine) {
@@ -77,14 +83,25 @@ public final class FieldOutputOptions {
         if (trackPoints < 2 || routePoints < 2) {
             throw new CommandLine.ParameterException(commandLine, "--gpx-track-points and --gpx-route-points must be at least 2");
         }
+        tripOptions.check(commandLine);
         if (directions != null && DirectionSheetWriter.isHtml(directions) == null) {
             throw new CommandLine.ParameterException(commandLine, "--directions " + directions
                     + ": name the file .csv or .html");
         }
     }
 
-    /** Reorders the plan's tours for fewer U-turns and crossing turns, unless asked to keep them as found. */
-    Plan arrange(Plan plan, StageClock clock) {
+    /**
+     * Cuts the plan's tour into trips when asked, then reorders the tours (or trips) for fewer U-turns and
+     * crossing turns, unless asked to keep them as found.
+     */
+    Plan arrange(Plan solved, StageClock clock) {
+        Plan plan;
+        if (tripOptions.requested()) {
+            trips = clock.time("trips", () -> tripOptions.cut(solved));
+            plan = solved.withTours(trips.trips().stream().map(Trip::tour).toList());
+        } else {
+            plan = solved;
+        }
         return clock.time("turns", () -> {
             bearings = EdgeBearings.of(plan.network());
             plainCounts = counts(plan, plan.tours());
@@ -118,9 +135,17 @@ public final class FieldOutputOptions {
             sheets.add(Directions.of(plan.network(), bearings, side, tour));
         }
         TurnCounts counts = counts(plan, tours);
-        String label = "Tour";
+        String label = trips == null ? "Tour" : "Trip";
         List<String[]> text = new ArrayList<>();
         ObjectNode json = JsonNodeFactory.instance.objectNode();
+        if (trips != null) {
+            List<Trip> ordered = new ArrayList<>();
+            for (int t = 0; t < tours.size(); t++) {
+                Trip cut = trips.trips().get(t);
+                ordered.add(new Trip(tours.get(t), cut.length(), cut.service(), cut.demand(), cut.overLimit()));
+            }
+            tripOptions.report(trips, ordered, json, text);
+        }
         ObjectNode turns = json.putObject("turns");
         turns.put("traffic_side", side.name().toLowerCase(Locale.ROOT));
         turns.put("u_turns", counts.uTurns());

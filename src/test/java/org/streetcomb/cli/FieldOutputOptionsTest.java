@@ -35,6 +35,18 @@ class FieldOutputOptionsTest {
     }
 
     @Test
+    void tripsFromTheReadmeCommandFitTheShift() {
+        StringWriter out = new StringWriter();
+        int code = Main.run(new String[] {"plan", "fixtures/demo/brackenford.geojson", "--depot=-31.2,44.6",
+            "--max-trip-hours", "1.5", "--trip-restarts", "2", "--json"},
+                new PrintWriter(out), new PrintWriter(new StringWriter()));
+        assertEquals(ExitCode.OK, code, out.toString());
+        String json = out.toString();
+        assertTrue(json.contains("\"trips\""), json);
+        assertFalse(json.contains("\"over_limit\" : true"), "every trip fits 1.5 h");
+    }
+
+    @Test
     void directionSheetWithAnUnknownExtensionIsRefusedBeforePlanning() {
         Path sheet = folder.resolve("directions.txt");
         StringWriter err = new StringWriter();
