@@ -13,6 +13,7 @@ import org.locationtech.jts.noding.NodedSegmentString;
 import org.locationtech.jts.noding.SegmentString;
 import org.locationtech.jts.noding.snap.SnappingNoder;
 import org.streetcomb.read.RoadFeature;
+import org.streetcomb.read.RoadLayer;
 
 /**
  * Turns road lines into a planar {@link StreetNetwork}: every crossing and every touch becomes a node,
@@ -34,6 +35,14 @@ public final class NetworkBuilder {
             throw new IllegalArgumentException("snap tolerance must be a positive number of metres");
         }
         this.snapTolerance = snapToleranceMetres;
+    }
+
+    /**
+     * Builds the network of a layer: joined by the layer's own node ids when it has them (OpenStreetMap,
+     * where ways meet only at shared nodes, so bridges and tunnels stay apart), else by noding its lines.
+     */
+    public StreetNetwork build(RoadLayer layer) {
+        return layer.hasTopology() ? joinByNodeIds(layer.features(), layer.endNodes()) : build(layer.features());
     }
 
     public StreetNetwork build(List<RoadFeature> features) {
@@ -97,6 +106,43 @@ public final class NetworkBuilder {
         return new StreetNetwork(nodeLon, nodeLat, Arrays.copyOf(from, edges), Arrays.copyOf(to, edges),
                 length, Arrays.copyOf(feature, edges), Arrays.copyOf(pointStart, edges + 1),
                 Arrays.copyOf(points, 2 * pointCount), features);
+    }
+
+    /** One edge per line, from the node of its start id to the node of its end id (nodes in id order). */
+    private static StreetNetwork joinByNodeIds(List<RoadFeature> features, long[] endNodes) {
+        long[] ids = Arrays.stream(endNodes).sorted().distinct().toArray();
+        int m = features.size();
+        double[] nodeLon = new double[ids.length];
+        double[] nodeLat = new double[ids.length];
+        int[] from = new int[m];
+        int[] to = new int[m];
+        int[] feature = new int[m];
+        int[] pointStart = new int[m + 1];
+        for (int e = 0; e < m; e++) {
+            pointStart[e + 1] = pointStart[e] + features.get(e).line().getNumPoints();
+        }
+        double[] points = new double[2 * pointStart[m]];
+        for (int e = 0; e < m; e++) {
+            LineString line = features.get(e).line();
+            for (int i = 0; i < line.getNumPoints(); i++) {
+                Coordinate c = line.getCoordinateN(i);
+                points[2 * (pointStart[e] + i)] = c.x;
+                points[2 * (pointStart[e] + i) + 1] = c.y;
+            }
+            feature[e] = e;
+            from[e] = Arrays.binarySearch(ids, endNodes[2 * e]);
+            to[e] = Arrays.binarySearch(ids, endNodes[2 * e + 1]);
+            Coordinate first = line.getCoordinateN(0);
+            Coordinate last = line.getCoordinateN(line.getNumPoints() - 1);
+            nodeLon[from[e]] = first.x;
+            nodeLat[from[e]] = first.y;
+            nodeLon[to[e]] = last.x;
+            nodeLat[to[e]] = last.y;
+        }
+        double[] length = IntStream.range(0, m).parallel()
+                .mapToDouble(e -> GeodesicLength.ofPolyline(points, pointStart[e], pointStart[e + 1] - pointStart[e]))
+                .toArray();
+        return new StreetNetwork(nodeLon, nodeLat, from, to, length, feature, pointStart, points, features);
     }
 
     private static int addNode(List<Coordinate> nodes, Coordinate c) {

@@ -35,7 +35,7 @@ public final class Planner {
     public static Plan plan(PlanRequest request, RepairOptions repairs, StageClock clock) {
         RoadLayer layer = clock.time("read", () -> LayerReaders.read(request.input(), request.readOptions()));
         List<String> warnings = new ArrayList<>();
-        StreetNetwork built = clock.time("network", () -> new NetworkBuilder(request.snapTolerance()).build(layer.features()));
+        StreetNetwork built = clock.time("network", () -> new NetworkBuilder(request.snapTolerance()).build(layer));
         NetworkRepair.Result repaired = repairs.equals(RepairOptions.NONE)
                 ? new NetworkRepair.Result(layer.features(), built, List.of())
                 : clock.time("repair", () -> NetworkRepair.apply(layer.features(), layer.report(), built,

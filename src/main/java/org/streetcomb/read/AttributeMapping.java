@@ -66,7 +66,8 @@ final class AttributeMapping {
         return Travel.BOTH;
     }
 
-    private boolean required(Map<String, String> properties) {
+    /** Whether the street must be serviced: every street, unless a required field is named. */
+    boolean required(Map<String, String> properties) {
         if (options.requiredField() == null) {
             return true;
         }

@@ -30,9 +30,15 @@ public final class LayerReaders {
             }
             return new GeoJsonReader(options);
         }
+        if (name.endsWith(".osm") || name.endsWith(".osm.gz") || name.endsWith(".osm.bz2") || name.endsWith(".osm.pbf")) {
+            if (options.crs() != null) {
+                throw InputError.at(file, null, "--crs does not apply: OpenStreetMap data is always WGS84 longitude/latitude");
+            }
+            return new OsmReader(options, name.endsWith(".pbf"));
+        }
         if (name.endsWith(".shp") || name.endsWith(".zip")) {
             return new ShapefileReader(options);
         }
-        throw InputError.at(file, null, "unknown file type: expected .geojson, .json, .shp or a .zip holding a shapefile");
+        throw InputError.at(file, null, "unknown file type: expected .geojson, .json, .shp, a .zip holding a shapefile, .osm, .osm.gz, .osm.bz2 or .osm.pbf");
     }
 }

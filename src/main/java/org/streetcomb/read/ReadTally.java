@@ -48,7 +48,12 @@ final class ReadTally {
     }
 
     RoadLayer layer(Path file, String sourceCrs) {
+        return layer(file, sourceCrs, null);
+    }
+
+    /** @param endNodes for a layer with its own topology, the start and end node ids of each line */
+    RoadLayer layer(Path file, String sourceCrs, long[] endNodes) {
         return new RoadLayer(file, List.copyOf(lines),
-                new ReadReport(features, lines.size(), skipped, oneWay, notes, sourceCrs));
+                new ReadReport(features, lines.size(), skipped, oneWay, notes, sourceCrs), endNodes);
     }
 }

@@ -2,11 +2,8 @@ package org.streetcomb.read;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
-import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.io.IOException;
-import java.io.PrintWriter;
-import java.io.StringWriter;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -14,8 +11,6 @@ import java.util.zip.ZipEntry;
 import java.util.zip.ZipOutputStream;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
-import org.streetcomb.ExitCode;
-import org.streetcomb.cli.Main;
 
 /**
  * Broken shapefiles give a one-line error naming the file and what is wrong, exit code 3, no stack trace
@@ -38,20 +33,7 @@ class ShapefileBadInputTest {
     }
 
     private void assertRefused(Path layer, String expected, String... options) {
-        Path out = dir.resolve("tour.geojson");
-        StringWriter err = new StringWriter();
-        String[] args = new String[3 + options.length];
-        args[0] = "plan";
-        args[1] = layer.toString();
-        args[2] = "--out=" + out;
-        System.arraycopy(options, 0, args, 3, options.length);
-        int code = Main.run(args, new PrintWriter(new StringWriter()), new PrintWriter(err, true));
-        String message = err.toString();
-        assertEquals(ExitCode.BAD_INPUT, code, message);
-        assertEquals(1, message.lines().count(), message);
-        assertTrue(message.contains(expected), () -> "expected '" + expected + "' in: " + message);
-        assertFalse(message.contains("Exception"), message);
-        assertFalse(Files.exists(out));
+        Refusals.assertRefused(dir, layer, expected, options);
     }
 
     @Test
