@@ -33,8 +33,13 @@ import org.streetcomb.write.AtomicFile;
  */
 public final class HtmlReportWriter {
 
+    /** Up to this many groups are listed open; more are folded away so the summary stays in view. */
+    private static final int OPEN_GROUPS = 12;
     private static final Pattern TILE_ORIGIN = Pattern.compile("^(https?)://([^/?#]+)/");
-    /** Positions are written as integers in millionths of a degree (about 0.1 m), delta-coded. */
+    /**
+     * Positions are written as integers in millionths of a degree (about 0.1 m), each the difference from the
+     * position before it within the feature.
+     */
     private static final double SCALE = 1e6;
 
     public void write(Path target, MapReport report) {
@@ -77,13 +82,15 @@ public final class HtmlReportWriter {
         }
         w.write("</ul>\n");
         if (!report.groups().isEmpty()) {
-            w.write("<h3>Show</h3>\n<ul class=\"switches groups\">\n");
+            w.write("<details class=\"groups\"" + (report.groups().size() <= OPEN_GROUPS ? " open" : "") + "><summary>Show "
+                    + report.groups().size() + (report.groups().size() == 1 ? " group" : " groups") + "</summary>\n"
+                    + "<ul class=\"switches\">\n");
             for (MapGroup group : report.groups()) {
                 w.write("<li><label><input type=\"checkbox\" data-group=\"" + HtmlText.escape(group.id()) + "\" checked> "
                         + swatch(MapLayer.Kind.LINES, MapStyle.solid(group.colour(), 4, 1)) + HtmlText.escape(group.title())
                         + "</label></li>\n");
             }
-            w.write("</ul>\n");
+            w.write("</ul>\n</details>\n");
         }
         w.write("<p class=\"hint\">Point at a line for its step and street; click for details.</p></section>\n");
         w.write("<section id=\"summary\"><h2>Summary</h2>\n" + SummaryTables.html(report.summary()) + "\n</section>\n");
@@ -225,11 +232,12 @@ public final class HtmlReportWriter {
             json.writeEndArray();
         }
         json.writeArrayFieldStart("p");
+        // deltas run on from one part to the next, so only the feature's first position is written in full
+        long lastX = 0;
+        long lastY = 0;
         for (double[] part : feature.parts()) {
             double[] shown = simplifier == null ? part : simplifier.simplify(part);
             json.writeStartArray();
-            long lastX = 0;
-            long lastY = 0;
             for (int i = 0; i < shown.length; i += 2) {
                 bounds.add(shown[i], shown[i + 1]);
                 long x = Math.round(shown[i] * SCALE);

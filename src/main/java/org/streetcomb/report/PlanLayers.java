@@ -1,11 +1,14 @@
 package org.streetcomb.report;
 
 import java.util.ArrayList;
-import java.util.IdentityHashMap;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
+import org.locationtech.jts.geom.Coordinate;
+import org.locationtech.jts.geom.GeometryFactory;
+import org.locationtech.jts.geom.LineString;
+import org.locationtech.jts.operation.linemerge.LineMerger;
 import org.streetcomb.network.StreetNetwork;
 import org.streetcomb.plan.Plan;
 import org.streetcomb.read.RoadFeature;
@@ -14,8 +17,8 @@ import org.streetcomb.tour.Tour;
 /**
  * The map layers of a plan: the street network, the service and deadhead passes of each tour, the
  * direction of travel, step numbers and the depot. Consecutive steps of a tour on the same street with
- * the same kind of pass are drawn as one run, so a street split at every junction is still one line to
- * point at, and a large plan stays quick to draw.
+ * the same kind of pass are drawn as one run, and the network is drawn one street name at a time, so a
+ * street split at every junction is still one line to point at, and a large plan stays quick to draw.
  */
 public final class PlanLayers {
 
@@ -26,11 +29,17 @@ public final class PlanLayers {
     static final String DEADHEAD_COLOUR = "#f0a202";
     static final String ARROW_COLOUR = "#263238";
     static final String DEPOT_COLOUR = "#d7263d";
+    static final String START_COLOUR = "#36454f";
     /** Above this many runs, step labels would hide the map and slow it: the step-number layer is left out. */
     static final int MAX_STEP_LABELS = 2000;
+    /** Above this many arrows the layer starts switched off, so a large plan opens quickly. */
+    static final int MAX_ARROWS_SHOWN = 20_000;
     /** Steps shorter than this get no arrow: it would not be readable. */
     private static final double MIN_ARROW_STEP = 6;
     private static final double METRES_PER_DEGREE = Math.PI / 180 * 6_371_008.8;
+    /** Feature ids listed in a street's details; the rest are counted. */
+    private static final int IDS_LISTED = 8;
+    private static final GeometryFactory FACTORY = new GeometryFactory();
 
     private final Plan plan;
     private final StreetNetwork network;
@@ -67,14 +76,19 @@ public final class PlanLayers {
         List<MapFeature> deadhead = new ArrayList<>();
         List<MapFeature> arrows = new ArrayList<>();
         List<MapFeature> labels = new ArrayList<>();
+        int arrowCount = 0;
         for (int t = 0; t < plan.tours().size(); t++) {
             Tour tour = plan.tours().get(t);
             for (Run run : runs(tour)) {
                 MapFeature feature = run.feature(t);
                 (run.service ? service : deadhead).add(feature);
                 labels.add(run.label(t));
+                double[][] chevrons = arrows(tour, run);
+                arrowCount += chevrons.length;
+                if (chevrons.length > 0) {
+                    arrows.add(new MapFeature(chevrons, groupId(t), null, "", Map.of()));
+                }
             }
-            arrows.add(new MapFeature(arrows(tour), groupId(t), null, "", Map.of()));
         }
         List<MapLayer> layers = new ArrayList<>();
         layers.add(new MapLayer("streets", "Streets", "every street of the network, as noded",
@@ -83,55 +97,53 @@ public final class PlanLayers {
                 MapLayer.Kind.LINES, MapStyle.solid(TOUR_COLOURS[0], 4, 0.85), true, service));
         layers.add(new MapLayer("deadhead", "Deadhead passes", "streets driven again without servicing",
                 MapLayer.Kind.LINES, new MapStyle(DEADHEAD_COLOUR, 6, 1, "3 6"), true, deadhead));
-        layers.add(new MapLayer("arrows", "Direction of travel", "one arrow per step, visible when zoomed in",
-                MapLayer.Kind.LINES, MapStyle.solid(ARROW_COLOUR, 1.5, 0.9), true, arrows));
+        boolean arrowsShown = arrowCount <= MAX_ARROWS_SHOWN;
+        layers.add(new MapLayer("arrows", "Direction of travel", arrowsShown ? "one arrow per step, visible when zoomed in"
+                : "one arrow per step, visible when zoomed in; off at start on a plan this large",
+                MapLayer.Kind.LINES, MapStyle.solid(ARROW_COLOUR, 1.5, 0.9), arrowsShown, arrows));
         if (labels.size() <= MAX_STEP_LABELS) {
             layers.add(new MapLayer("steps", "Step numbers", "the first step of each run on one street",
                     MapLayer.Kind.LABELS, MapStyle.solid(ARROW_COLOUR, 1, 1), false, labels));
         }
-        layers.add(new MapLayer("depot", "Depot and tour starts", "", MapLayer.Kind.POINTS,
-                MapStyle.solid(DEPOT_COLOUR, 16, 1), true, starts()));
+        List<MapFeature> otherStarts = starts(false);
+        if (!otherStarts.isEmpty()) {
+            layers.add(new MapLayer("starts", "Tour starts", "where each separate part's tour starts and ends",
+                    MapLayer.Kind.POINTS, MapStyle.solid(START_COLOUR, 10, 1), true, otherStarts));
+        }
+        layers.add(new MapLayer("depot", "Depot", "", MapLayer.Kind.POINTS, MapStyle.solid(DEPOT_COLOUR, 16, 1), true,
+                starts(true)));
         return layers;
     }
 
+    /**
+     * One feature per street name (per feature id for unnamed streets), its edges sewn into as few lines as
+     * possible with JTS's LineMerger, so a street split at every junction is one thing to point at.
+     */
     private List<MapFeature> streets() {
-        Map<RoadFeature, Integer> index = new IdentityHashMap<>();
-        List<List<double[]>> parts = new ArrayList<>();
-        List<double[]> lengths = new ArrayList<>();
-        List<RoadFeature> order = new ArrayList<>();
+        Map<String, Street> byKey = new LinkedHashMap<>();
         for (int e = 0; e < network.edgeCount(); e++) {
             RoadFeature source = network.feature(e);
-            Integer i = index.get(source);
-            if (i == null) {
-                i = order.size();
-                index.put(source, i);
-                order.add(source);
-                parts.add(new ArrayList<>());
-                lengths.add(new double[1]);
-            }
-            parts.get(i).add(edgePoints(e, true));
-            lengths.get(i)[0] += network.length(e);
+            byKey.computeIfAbsent(streetKey(source), k -> new Street(streetName(source))).add(e, source);
         }
         List<MapFeature> features = new ArrayList<>();
-        for (int i = 0; i < order.size(); i++) {
-            RoadFeature source = order.get(i);
-            Map<String, String> details = new LinkedHashMap<>();
-            details.put("Feature id", source.id());
-            details.put("Length (m)", metres(lengths.get(i)[0]));
-            details.put("Edges", String.valueOf(parts.get(i).size()));
-            features.add(new MapFeature(parts.get(i).toArray(new double[0][]), null, null, streetName(source), details));
+        for (Street street : byKey.values()) {
+            features.add(street.feature());
         }
         return features;
     }
 
-    private List<MapFeature> starts() {
+    /** The depot, or the start of every tour but the depot's, each a point with its node and position. */
+    private List<MapFeature> starts(boolean depot) {
         List<MapFeature> starts = new ArrayList<>();
         for (int t = 0; t < plan.tours().size(); t++) {
             int node = plan.tours().get(t).start();
+            if ((node == plan.depot()) != depot) {
+                continue;
+            }
             Map<String, String> details = new LinkedHashMap<>();
             details.put("Node", String.valueOf(node));
             details.put("Position", String.format(Locale.ROOT, "%.7f, %.7f", network.lon(node), network.lat(node)));
-            String label = node == plan.depot() ? "Depot, start and end of tour " + (t + 1) : "Start and end of tour " + (t + 1);
+            String label = depot ? "Depot: start and end of tour " + (t + 1) : "Start and end of tour " + (t + 1);
             starts.add(MapFeature.point(network.lon(node), network.lat(node), groupId(t), label, details));
         }
         return starts;
@@ -173,10 +185,10 @@ public final class PlanLayers {
         return points;
     }
 
-    /** A chevron at the middle of each step long enough to carry one, pointing the way the step is driven. */
-    private double[][] arrows(Tour tour) {
+    /** A chevron at the middle of each step of the run long enough to carry one, pointing the way it is driven. */
+    private double[][] arrows(Tour tour, Run run) {
         List<double[]> chevrons = new ArrayList<>();
-        for (int i = 0; i < tour.steps(); i++) {
+        for (int i = run.first; i <= run.last; i++) {
             int e = tour.edges()[i];
             double length = network.length(e);
             if (length >= MIN_ARROW_STEP) {
@@ -223,6 +235,54 @@ public final class PlanLayers {
 
     private static String metres(double value) {
         return String.format(Locale.ROOT, "%.1f", value);
+    }
+
+    /** The edges of one street, gathered for the network layer. */
+    private final class Street {
+        final String name;
+        final List<LineString> edges = new ArrayList<>();
+        final List<String> ids = new ArrayList<>();
+        RoadFeature lastSource;
+        double length;
+
+        Street(String name) {
+            this.name = name;
+        }
+
+        void add(int e, RoadFeature source) {
+            double[] points = edgePoints(e, true);
+            Coordinate[] coordinates = new Coordinate[points.length / 2];
+            for (int k = 0; k < coordinates.length; k++) {
+                coordinates[k] = new Coordinate(points[2 * k], points[2 * k + 1]);
+            }
+            edges.add(FACTORY.createLineString(coordinates));
+            if (source != lastSource && (ids.isEmpty() || !ids.get(ids.size() - 1).equals(source.id()))) {
+                ids.add(source.id());
+            }
+            lastSource = source;
+            length += network.length(e);
+        }
+
+        MapFeature feature() {
+            LineMerger merger = new LineMerger();
+            merger.add(edges);
+            List<double[]> parts = new ArrayList<>();
+            for (Object merged : merger.getMergedLineStrings()) {
+                Coordinate[] coordinates = ((LineString) merged).getCoordinates();
+                double[] part = new double[2 * coordinates.length];
+                for (int k = 0; k < coordinates.length; k++) {
+                    part[2 * k] = coordinates[k].x;
+                    part[2 * k + 1] = coordinates[k].y;
+                }
+                parts.add(part);
+            }
+            Map<String, String> details = new LinkedHashMap<>();
+            details.put("Feature ids", ids.size() <= IDS_LISTED ? String.join(", ", ids)
+                    : String.join(", ", ids.subList(0, IDS_LISTED)) + " and " + (ids.size() - IDS_LISTED) + " more");
+            details.put("Length (m)", metres(length));
+            details.put("Edges", String.valueOf(edges.size()));
+            return new MapFeature(parts.toArray(new double[0][]), null, null, name, details);
+        }
     }
 
     /** Consecutive steps of one tour on one street with one kind of pass. */

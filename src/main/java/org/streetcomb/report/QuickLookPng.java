@@ -58,9 +58,10 @@ public final class QuickLookPng {
             g.fillRect(0, 0, width, height);
             PixelFrame frame = frame(report);
             if (frame != null) {
+                double thinning = thinning(frame.metresPerPixel(centreLatitude(report)));
                 for (MapLayer layer : report.layers()) {
                     if (layer.shown()) {
-                        layer(g, frame, layer);
+                        layer(g, frame, layer, thinning);
                     }
                 }
                 scaleBar(g, frame, report);
@@ -96,10 +97,18 @@ public final class QuickLookPng {
         return new PixelFrame(bounds, MARGIN, HEADER + MARGIN, width - 2.0 * MARGIN, height - HEADER - FOOTER - 2.0 * MARGIN);
     }
 
-    private static void layer(Graphics2D g, PixelFrame frame, MapLayer layer) {
+    /**
+     * Lines are drawn at full width while a pixel covers up to 2 m, and thinner (down to 40 %) when the
+     * picture shows a whole district, where full-width lines would run into each other.
+     */
+    static double thinning(double metresPerPixel) {
+        return Math.max(0.4, Math.min(1, 2 / metresPerPixel));
+    }
+
+    private static void layer(Graphics2D g, PixelFrame frame, MapLayer layer, double thinning) {
         MapStyle style = layer.style();
         if (layer.kind() == MapLayer.Kind.LINES) {
-            g.setStroke(stroke(style));
+            g.setStroke(stroke(style, thinning));
             for (MapFeature feature : layer.features()) {
                 g.setColor(colour(feature.colour() != null ? feature.colour() : style.colour(), style.opacity()));
                 Path2D.Double path = new Path2D.Double();
@@ -132,16 +141,17 @@ public final class QuickLookPng {
         }
     }
 
-    private static BasicStroke stroke(MapStyle style) {
+    private static BasicStroke stroke(MapStyle style, double thinning) {
+        float width = (float) (style.width() * thinning);
         if (style.dash().isEmpty()) {
-            return new BasicStroke((float) style.width(), BasicStroke.CAP_ROUND, BasicStroke.JOIN_ROUND);
+            return new BasicStroke(width, BasicStroke.CAP_ROUND, BasicStroke.JOIN_ROUND);
         }
         String[] parts = style.dash().trim().split(" +");
         float[] dash = new float[parts.length];
         for (int i = 0; i < parts.length; i++) {
-            dash[i] = Float.parseFloat(parts[i]);
+            dash[i] = (float) (Float.parseFloat(parts[i]) * thinning);
         }
-        return new BasicStroke((float) style.width(), BasicStroke.CAP_BUTT, BasicStroke.JOIN_ROUND, 10f, dash, 0f);
+        return new BasicStroke(width, BasicStroke.CAP_BUTT, BasicStroke.JOIN_ROUND, 10f, dash, 0f);
     }
 
     static Color colour(String hex, double opacity) {
@@ -180,7 +190,7 @@ public final class QuickLookPng {
             if (layer.kind() == MapLayer.Kind.POINTS) {
                 g.fill(new Ellipse2D.Double(x + 14, cy - 5, 10, 10));
             } else {
-                g.setStroke(stroke(new MapStyle(style.colour(), Math.min(style.width(), 5), 1, style.dash())));
+                g.setStroke(stroke(new MapStyle(style.colour(), Math.min(style.width(), 5), 1, style.dash()), 1));
                 g.draw(new Line2D.Double(x + 8, cy, x + 32, cy));
             }
             g.setColor(new Color(0x1f2a30));

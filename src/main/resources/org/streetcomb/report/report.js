@@ -17,16 +17,19 @@
     return div.innerHTML;
   }
 
-  function decode(part) {
-    var points = [];
+  // Positions are millionths of a degree, each the difference from the one before it in the feature.
+  function decode(parts) {
     var x = 0;
     var y = 0;
-    for (var i = 0; i < part.length; i += 2) {
-      x += part[i];
-      y += part[i + 1];
-      points.push([y / 1e6, x / 1e6]);
-    }
-    return points;
+    return parts.map(function (part) {
+      var points = [];
+      for (var i = 0; i < part.length; i += 2) {
+        x += part[i];
+        y += part[i + 1];
+        points.push([y / 1e6, x / 1e6]);
+      }
+      return points;
+    });
   }
 
   function detailsNode(feature) {
@@ -77,17 +80,17 @@
       var interactive = Boolean(feature.t || feature.d);
       var shape;
       if (layer.kind === 'lines') {
-        shape = L.polyline(feature.p.map(decode), {
+        shape = L.polyline(decode(feature.p), {
           renderer: renderer, color: colour, weight: style.width, opacity: style.opacity,
           dashArray: style.dash || null, lineCap: style.dash ? 'butt' : 'round', interactive: interactive
         });
       } else if (layer.kind === 'points') {
-        shape = L.circleMarker(decode(feature.p[0])[0], {
+        shape = L.circleMarker(decode(feature.p)[0][0], {
           renderer: renderer, radius: style.width / 2, color: '#ffffff', weight: 2,
           fillColor: colour, fillOpacity: style.opacity, interactive: interactive
         });
       } else {
-        shape = L.marker(decode(feature.p[0])[0], { icon: labelIcon(feature.t || ''), pane: 'layer-' + layer.id, keyboard: false });
+        shape = L.marker(decode(feature.p)[0][0], { icon: labelIcon(feature.t || ''), pane: 'layer-' + layer.id, keyboard: false });
       }
       shape.reportFeature = feature;
       group.addLayer(shape);
