@@ -23,8 +23,8 @@ import org.streetcomb.tour.Tour;
 public final class PlanLayers {
 
     /** Tour colours, chosen to stay apart from each other, from the deadhead amber and the depot red. */
-    static final String[] TOUR_COLOURS = {"#2b59c3", "#2a9d8f", "#8f3fb5", "#1d7a3a", "#0b6e8a",
-        "#a23b72", "#5c6f1d", "#3d3b8e", "#6b4e16", "#c2185b"};
+    static final String[] TOUR_COLOURS = {"#2b59c3", "#2a9d8f", "#8f3fb5", "#1d7a3a", "#c2185b",
+        "#0b6e8a", "#5c6f1d", "#3d3b8e", "#6b4e16", "#a23b72"};
     static final String NETWORK_COLOUR = "#9aa39c";
     static final String DEADHEAD_COLOUR = "#f0a202";
     static final String ARROW_COLOUR = "#263238";
@@ -43,10 +43,12 @@ public final class PlanLayers {
 
     private final Plan plan;
     private final StreetNetwork network;
+    private final String noun;
 
     private PlanLayers(Plan plan) {
         this.plan = plan;
         this.network = plan.network();
+        this.noun = noun(plan);
     }
 
     public static List<MapLayer> of(Plan plan) {
@@ -55,12 +57,22 @@ public final class PlanLayers {
 
     /** One group per tour, so each tour can be shown alone. */
     public static List<MapGroup> groups(Plan plan) {
+        String noun = noun(plan);
         List<MapGroup> groups = new ArrayList<>();
         for (int t = 0; t < plan.tours().size(); t++) {
             double km = plan.tours().get(t).length(plan.network()) / 1000;
-            groups.add(new MapGroup(groupId(t), String.format(Locale.ROOT, "Tour %d (%.2f km)", t + 1, km), tourColour(t)));
+            groups.add(new MapGroup(groupId(t), String.format(Locale.ROOT, "%s %d (%.2f km)", noun, t + 1, km), tourColour(t)));
         }
         return groups;
+    }
+
+    /**
+     * "Trip" when the plan's walks are trips cut from one tour (more than one leaves the depot), else "Tour"
+     * (one walk, or one per separate part of the network, each from its own start).
+     */
+    static String noun(Plan plan) {
+        long fromDepot = plan.tours().stream().filter(t -> t.start() == plan.depot()).count();
+        return fromDepot > 1 ? "Trip" : "Tour";
     }
 
     static String tourColour(int tour) {
@@ -93,7 +105,7 @@ public final class PlanLayers {
         List<MapLayer> layers = new ArrayList<>();
         layers.add(new MapLayer("streets", "Streets", "every street of the network, as noded",
                 MapLayer.Kind.LINES, MapStyle.solid(NETWORK_COLOUR, 2, 1), true, streets()));
-        layers.add(new MapLayer("service", "Service passes", "streets driven to service them, in the tour's colour",
+        layers.add(new MapLayer("service", "Service passes", "streets driven to service them, in the colour of their " + noun.toLowerCase(Locale.ROOT),
                 MapLayer.Kind.LINES, MapStyle.solid(TOUR_COLOURS[0], 4, 0.85), true, service));
         layers.add(new MapLayer("deadhead", "Deadhead passes", "streets driven again without servicing",
                 MapLayer.Kind.LINES, new MapStyle(DEADHEAD_COLOUR, 6, 1, "3 6"), true, deadhead));
@@ -143,7 +155,8 @@ public final class PlanLayers {
             Map<String, String> details = new LinkedHashMap<>();
             details.put("Node", String.valueOf(node));
             details.put("Position", String.format(Locale.ROOT, "%.7f, %.7f", network.lon(node), network.lat(node)));
-            String label = depot ? "Depot: start and end of tour " + (t + 1) : "Start and end of tour " + (t + 1);
+            String walk = noun.toLowerCase(Locale.ROOT) + " " + (t + 1);
+            String label = depot ? "Depot: start and end of " + walk : "Start and end of " + walk;
             starts.add(MapFeature.point(network.lon(node), network.lat(node), groupId(t), label, details));
         }
         return starts;
@@ -328,12 +341,12 @@ public final class PlanLayers {
         MapFeature feature(int tour) {
             double[] line = line();
             Map<String, String> details = new LinkedHashMap<>();
-            details.put("Tour", String.valueOf(tour + 1));
+            details.put(noun, String.valueOf(tour + 1));
             details.put(first == last ? "Step" : "Steps", steps());
             details.put("Street", name);
             details.put("Pass", service ? "service" : "deadhead");
             details.put("Length (m)", metres(length));
-            String label = String.format(Locale.ROOT, "Tour %d, step %s: %s (%s)", tour + 1, steps(), name,
+            String label = String.format(Locale.ROOT, "%s %d, step %s: %s (%s)", noun, tour + 1, steps(), name,
                     service ? "service" : "deadhead");
             return new MapFeature(new double[][] {line}, groupId(tour), service ? tourColour(tour) : null, label, details);
         }

@@ -11,6 +11,7 @@ import java.awt.geom.Line2D;
 import java.awt.geom.Path2D;
 import java.awt.image.BufferedImage;
 import java.nio.file.Path;
+import java.util.List;
 import java.util.Locale;
 import javax.imageio.ImageIO;
 import org.streetcomb.write.AtomicFile;
@@ -18,7 +19,8 @@ import org.streetcomb.write.AtomicFile;
 /**
  * Draws a {@link MapReport} as a PNG of a stated pixel size with Java2D, for terminals, e-mail and CI
  * artefacts: the layers that the HTML report shows at start, in the same colours and widths, under a title
- * band, with a legend, a scale bar and the first caution. Web Mercator, north up, fitted to the layers.
+ * band, with a legend (the groups too, such as each trip's colour, when there are a few), a scale bar and
+ * the cautions that fit. Web Mercator, north up, fitted to the layers.
  */
 public final class QuickLookPng {
 
@@ -26,6 +28,8 @@ public final class QuickLookPng {
     private static final int HEADER = 30;
     private static final int FOOTER = 22;
     private static final int MARGIN = 16;
+    /** Groups (tours, trips) are listed in the legend when there are at most this many. */
+    private static final int LEGEND_GROUPS = 12;
 
     private final int width;
     private final int height;
@@ -170,6 +174,11 @@ public final class QuickLookPng {
                 textWidth = Math.max(textWidth, metrics.stringWidth(layer.title()));
             }
         }
+        List<MapGroup> groups = report.groups().size() > 1 && report.groups().size() <= LEGEND_GROUPS ? report.groups() : List.of();
+        for (MapGroup group : groups) {
+            rows++;
+            textWidth = Math.max(textWidth, metrics.stringWidth(group.title()));
+        }
         int boxWidth = textWidth + 46;
         int boxHeight = rows * 16 + 8;
         int x = MARGIN;
@@ -195,6 +204,14 @@ public final class QuickLookPng {
             }
             g.setColor(new Color(0x1f2a30));
             g.drawString(layer.title(), x + 40, cy + 4);
+        }
+        for (MapGroup group : groups) {
+            int cy = y + 12 + 16 * row++;
+            g.setColor(colour(group.colour(), 1));
+            g.setStroke(new BasicStroke(4f, BasicStroke.CAP_ROUND, BasicStroke.JOIN_ROUND));
+            g.draw(new Line2D.Double(x + 8, cy, x + 32, cy));
+            g.setColor(new Color(0x1f2a30));
+            g.drawString(group.title(), x + 40, cy + 4);
         }
     }
 

@@ -12,6 +12,9 @@ import org.streetcomb.plan.Plan;
 import org.streetcomb.plan.PlanRequest;
 import org.streetcomb.plan.Planner;
 import org.streetcomb.plan.StageClock;
+import org.streetcomb.trip.Trip;
+import org.streetcomb.trip.TripLimit;
+import org.streetcomb.trip.TripPlanner;
 
 /** The layers drawn for the demo plan carry every step once, and the lines drawn are as long as the plan says. */
 class PlanLayersTest {
@@ -60,6 +63,27 @@ class PlanLayersTest {
         }
         assertEquals(PLAN.serviceLength(), service, 1e-6 * PLAN.serviceLength());
         assertEquals(PLAN.deadheadLength(), deadhead, 1e-6 * PLAN.serviceLength());
+    }
+
+    @Test
+    void tripsCutFromTheTourEachGetTheirOwnGroupAndColour() {
+        List<Trip> trips = new TripPlanner(PLAN.network(), PLAN.depot(),
+                new TripPlanner.Settings(TripLimit.length(12_000), 0, 0, 1)).plan(PLAN.tours().get(0), null).trips();
+        Plan cut = PLAN.withTours(trips.stream().map(Trip::tour).toList());
+        assertTrue(trips.size() > 1, "the demo tour is longer than one 12 km trip");
+        List<MapGroup> groups = PlanLayers.groups(cut);
+        assertEquals(trips.size(), groups.size());
+        assertEquals(groups.size(), groups.stream().map(MapGroup::colour).distinct().count(), "one colour per trip");
+        assertTrue(groups.get(0).title().startsWith("Trip 1 "), groups.get(0).title());
+        for (MapLayer layer : PlanLayers.of(cut)) {
+            if (layer.id().equals("service")) {
+                for (MapFeature run : layer.features()) {
+                    MapGroup group = groups.get(Integer.parseInt(run.details().get("Trip")) - 1);
+                    assertEquals(group.id(), run.group());
+                    assertEquals(group.colour(), run.colour());
+                }
+            }
+        }
     }
 
     @Test
