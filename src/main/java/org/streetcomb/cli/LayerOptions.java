@@ -74,6 +74,16 @@ public final class LayerOptions {
                     + "needed for a shapefile without a .prj.")
     String crs;
 
+    @Option(names = "--grade-separated", order = 113,
+            description = "Join lines only where they share a vertex, never where they merely cross, so bridges and "
+                    + "tunnels drawn across streets stay apart (OpenStreetMap data always works this way).")
+    boolean gradeSeparated;
+
+    @Option(names = "--level-field", paramLabel = "FIELD", order = 114,
+            description = "Attribute giving each line's level (z-level, layer); implies --grade-separated: lines at "
+                    + "different levels meet only where one of them ends.")
+    String levelField;
+
     @CommandLine.Spec(CommandLine.Spec.Target.MIXEE)
     CommandLine.Model.CommandSpec mixee;
 
@@ -89,7 +99,8 @@ public final class LayerOptions {
         ReadOptions d = ReadOptions.DEFAULTS;
         return new ReadOptions(nameField, onewayField,
                 values(onewayForward, d.onewayForward()), values(onewayBackward, d.onewayBackward()),
-                values(onewayBoth, d.onewayBoth()), keep, drop, requiredField, mode, serviceRoads, privateRoads, crs);
+                values(onewayBoth, d.onewayBoth()), keep, drop, requiredField, mode, serviceRoads, privateRoads, crs,
+                gradeSeparated || levelField != null, levelField);
     }
 
     private static Set<String> values(List<String> given, Set<String> defaults) {

@@ -39,10 +39,18 @@ public final class NetworkBuilder {
 
     /**
      * Builds the network of a layer: joined by the layer's own node ids when it has them (OpenStreetMap,
-     * where ways meet only at shared nodes, so bridges and tunnels stay apart), else by noding its lines.
+     * where ways meet only at shared nodes, so bridges and tunnels stay apart); at shared vertices only when
+     * the layer asks for grade separation ({@link SharedVertexJoin}); else by noding its lines.
      */
     public StreetNetwork build(RoadLayer layer) {
-        return layer.hasTopology() ? joinByNodeIds(layer.features(), layer.endNodes()) : build(layer.features());
+        if (layer.hasTopology()) {
+            return joinByNodeIds(layer.features(), SharedVertexJoin.Pieces.of(layer.features(), layer.endNodes()));
+        }
+        if (layer.gradeSeparation() != null) {
+            return joinByNodeIds(layer.features(),
+                    SharedVertexJoin.split(layer.features(), snapTolerance, layer.gradeSeparation().levelField()));
+        }
+        return build(layer.features());
     }
 
     public StreetNetwork build(List<RoadFeature> features) {
@@ -108,41 +116,34 @@ public final class NetworkBuilder {
                 Arrays.copyOf(points, 2 * pointCount), features);
     }
 
-    /** One edge per line, from the node of its start id to the node of its end id (nodes in id order). */
-    private static StreetNetwork joinByNodeIds(List<RoadFeature> features, long[] endNodes) {
+    /** One edge per piece, from the node of its start id to the node of its end id (nodes in id order). */
+    private static StreetNetwork joinByNodeIds(List<RoadFeature> features, SharedVertexJoin.Pieces pieces) {
+        long[] endNodes = pieces.endNodes();
         long[] ids = Arrays.stream(endNodes).sorted().distinct().toArray();
-        int m = features.size();
+        int m = pieces.lines().size();
         double[] nodeLon = new double[ids.length];
         double[] nodeLat = new double[ids.length];
         int[] from = new int[m];
         int[] to = new int[m];
-        int[] feature = new int[m];
         int[] pointStart = new int[m + 1];
         for (int e = 0; e < m; e++) {
-            pointStart[e + 1] = pointStart[e] + features.get(e).line().getNumPoints();
+            pointStart[e + 1] = pointStart[e] + pieces.lines().get(e).length / 2;
         }
         double[] points = new double[2 * pointStart[m]];
         for (int e = 0; e < m; e++) {
-            LineString line = features.get(e).line();
-            for (int i = 0; i < line.getNumPoints(); i++) {
-                Coordinate c = line.getCoordinateN(i);
-                points[2 * (pointStart[e] + i)] = c.x;
-                points[2 * (pointStart[e] + i) + 1] = c.y;
-            }
-            feature[e] = e;
+            double[] line = pieces.lines().get(e);
+            System.arraycopy(line, 0, points, 2 * pointStart[e], line.length);
             from[e] = Arrays.binarySearch(ids, endNodes[2 * e]);
             to[e] = Arrays.binarySearch(ids, endNodes[2 * e + 1]);
-            Coordinate first = line.getCoordinateN(0);
-            Coordinate last = line.getCoordinateN(line.getNumPoints() - 1);
-            nodeLon[from[e]] = first.x;
-            nodeLat[from[e]] = first.y;
-            nodeLon[to[e]] = last.x;
-            nodeLat[to[e]] = last.y;
+            nodeLon[from[e]] = line[0];
+            nodeLat[from[e]] = line[1];
+            nodeLon[to[e]] = line[line.length - 2];
+            nodeLat[to[e]] = line[line.length - 1];
         }
         double[] length = IntStream.range(0, m).parallel()
                 .mapToDouble(e -> GeodesicLength.ofPolyline(points, pointStart[e], pointStart[e + 1] - pointStart[e]))
                 .toArray();
-        return new StreetNetwork(nodeLon, nodeLat, from, to, length, feature, pointStart, points, features);
+        return new StreetNetwork(nodeLon, nodeLat, from, to, length, pieces.feature(), pointStart, points, features);
     }
 
     private static int addNode(List<Coordinate> nodes, Coordinate c) {

@@ -19,7 +19,8 @@ public final class LayerReaders {
         if (!Files.isRegularFile(file)) {
             throw InputError.at(file, null, "no such file");
         }
-        return forFile(file, options).read(file);
+        RoadLayer layer = forFile(file, options).read(file);
+        return options.gradeSeparated() && !layer.hasTopology() ? layer.gradeSeparated(options.levelField()) : layer;
     }
 
     static LayerReader forFile(Path file, ReadOptions options) {

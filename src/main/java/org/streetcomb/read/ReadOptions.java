@@ -22,10 +22,13 @@ import java.util.Set;
  * @param serviceRoads    include OpenStreetMap service roads when driving
  * @param privateRoads    include OpenStreetMap roads with private or no access
  * @param crs             the layer's CRS as "EPSG:code" or a path to a WKT file, or null to use the file's own
+ * @param gradeSeparated  join a geometric layer's lines only at shared vertices, never at bare crossings
+ * @param levelField      attribute giving each line's level (z-level, layer), honoured with grade separation
  */
 public record ReadOptions(String nameField, String onewayField, Set<String> onewayForward, Set<String> onewayBackward,
                           Set<String> onewayBoth, List<FieldFilter> keep, List<FieldFilter> drop, String requiredField,
-                          TravelMode mode, boolean serviceRoads, boolean privateRoads, String crs) {
+                          TravelMode mode, boolean serviceRoads, boolean privateRoads, String crs,
+                          boolean gradeSeparated, String levelField) {
 
     /**
      * One-way encodings found in council layers and OpenStreetMap-derived exports (common practice):
@@ -37,7 +40,7 @@ public record ReadOptions(String nameField, String onewayField, Set<String> onew
     public static final Set<String> BOTH_VALUES = Set.of("no", "false", "0", "n", "b", "both", "");
 
     public static final ReadOptions DEFAULTS = new ReadOptions("name", "oneway", FORWARD_VALUES, BACKWARD_VALUES,
-            BOTH_VALUES, List.of(), List.of(), null, TravelMode.DRIVE, false, false, null);
+            BOTH_VALUES, List.of(), List.of(), null, TravelMode.DRIVE, false, false, null, false, null);
 
     public ReadOptions {
         onewayForward = lowerCase(onewayForward);
@@ -45,6 +48,24 @@ public record ReadOptions(String nameField, String onewayField, Set<String> onew
         onewayBoth = lowerCase(onewayBoth);
         keep = List.copyOf(keep);
         drop = List.copyOf(drop);
+    }
+
+    /** These options with the layer's CRS stated. */
+    public ReadOptions withCrs(String code) {
+        return new ReadOptions(nameField, onewayField, onewayForward, onewayBackward, onewayBoth, keep, drop,
+                requiredField, mode, serviceRoads, privateRoads, code, gradeSeparated, levelField);
+    }
+
+    /** These options with OpenStreetMap road selection for the mode, service roads and private roads. */
+    public ReadOptions withRoads(TravelMode travelMode, boolean service, boolean privateAccess) {
+        return new ReadOptions(nameField, onewayField, onewayForward, onewayBackward, onewayBoth, keep, drop,
+                requiredField, travelMode, service, privateAccess, crs, gradeSeparated, levelField);
+    }
+
+    /** These options with grade separation, honouring {@code field} (or none when null) as the level. */
+    public ReadOptions withGradeSeparation(String field) {
+        return new ReadOptions(nameField, onewayField, onewayForward, onewayBackward, onewayBoth, keep, drop,
+                requiredField, mode, serviceRoads, privateRoads, crs, true, field);
     }
 
     private static Set<String> lowerCase(Set<String> values) {

@@ -7,7 +7,6 @@ import java.io.IOException;
 import java.io.InputStream;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.util.List;
 import java.util.Set;
 import java.util.stream.Collectors;
 import org.apache.commons.compress.compressors.bzip2.BZip2CompressorInputStream;
@@ -34,9 +33,7 @@ class OsmReaderTest {
 
     /** Drive with service roads and private access, so the selection is the road classes alone. */
     private static ReadOptions everyDriveClass() {
-        ReadOptions d = ReadOptions.DEFAULTS;
-        return new ReadOptions(d.nameField(), d.onewayField(), d.onewayForward(), d.onewayBackward(), d.onewayBoth(),
-                List.of(), List.of(), null, TravelMode.DRIVE, true, true, null);
+        return ReadOptions.DEFAULTS.withRoads(TravelMode.DRIVE, true, true);
     }
 
     @ParameterizedTest

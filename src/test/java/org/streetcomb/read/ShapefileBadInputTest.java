@@ -124,9 +124,7 @@ class ShapefileBadInputTest {
                 entry(out, "mesa/streets" + ext, Files.readAllBytes(MESA.resolve("streets" + ext)));
             }
         }
-        ReadOptions d = ReadOptions.DEFAULTS;
-        RoadLayer layer = LayerReaders.read(zip, new ReadOptions(d.nameField(), d.onewayField(), d.onewayForward(),
-                d.onewayBackward(), d.onewayBoth(), d.keep(), d.drop(), null, d.mode(), false, false, "EPSG:2223"));
+        RoadLayer layer = LayerReaders.read(zip, ReadOptions.DEFAULTS.withCrs("EPSG:2223"));
         // SOURCES.md (measured with ogrinfo): 293 LineStrings
         assertEquals(293, layer.report().featuresRead());
     }

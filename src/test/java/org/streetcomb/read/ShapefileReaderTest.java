@@ -4,7 +4,6 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.nio.file.Path;
-import java.util.List;
 import java.util.Set;
 import java.util.TreeSet;
 import org.junit.jupiter.api.Test;
@@ -29,10 +28,7 @@ class ShapefileReaderTest {
     })
     void matchesGdal(String path, String crs, String oneWayWhere) {
         Path file = Path.of(path);
-        ReadOptions d = ReadOptions.DEFAULTS;
-        ReadOptions options = new ReadOptions(d.nameField(), d.onewayField(), d.onewayForward(), d.onewayBackward(),
-                d.onewayBoth(), List.of(), List.of(), null, d.mode(), false, false, crs);
-        RoadLayer layer = LayerReaders.read(file, options);
+        RoadLayer layer = LayerReaders.read(file, ReadOptions.DEFAULTS.withCrs(crs));
 
         String table = file.getFileName().toString().replace(".shp", "");
         String gdal = Gdal.ogrinfo("-dialect", "SQLite", "-sql", "SELECT COUNT(*) AS n, "
