@@ -38,6 +38,17 @@ public final class DirectedPostman {
      * that balances every node, and returns the total traversals.
      */
     static Traversals balance(PostmanProblem problem, int[] along, int[] against) {
+        return balanced(problem, along, against).traversals();
+    }
+
+    /**
+     * Traversals with their node potentials: sending k more units of deadhead from u to v would cost at
+     * least k * (potential[u] - potential[v]).
+     */
+    record Balanced(Traversals traversals, double[] potential) {
+    }
+
+    static Balanced balanced(PostmanProblem problem, int[] along, int[] against) {
         StreetNetwork network = problem.network();
         int n = network.nodeCount();
         int m = network.edgeCount();
@@ -69,6 +80,6 @@ public final class DirectedPostman {
             a[e] += alongArc[e] < 0 ? 0 : x[alongArc[e]];
             b[e] += againstArc[e] < 0 ? 0 : x[againstArc[e]];
         }
-        return Traversals.directed(a, b);
+        return new Balanced(Traversals.directed(a, b), flow.potentials());
     }
 }

@@ -27,6 +27,7 @@ final class MinCostFlow {
     private int[] capacities = new int[64];
     private int arcs;
     private final int nodes;
+    private double[] potential;
 
     MinCostFlow(int nodes) {
         this.nodes = nodes;
@@ -48,11 +49,21 @@ final class MinCostFlow {
     }
 
     /**
+     * Node potentials of the last solution (JGraphT's dual solution): the reduced cost
+     * {@code cost - potential[tail] + potential[head]} of every arc with spare capacity is at least zero, so
+     * any path from u to v in the residual network costs at least {@code potential[u] - potential[v]}.
+     */
+    double[] potentials() {
+        return potential;
+    }
+
+    /**
      * The flow on each arc of a minimum-cost flow that sends {@code supply[v]} units out of every node
      * (negative: into it). The supplies must sum to zero and be routable; otherwise this is a bug upstream.
      */
     int[] solve(int[] supply) {
         int[] flow = new int[arcs];
+        potential = new double[nodes];
         boolean any = false;
         for (int s : supply) {
             any |= s != 0;
@@ -83,8 +94,11 @@ final class MinCostFlow {
         }
         MinimumCostFlowProblem<Integer, Integer> problem = new MinimumCostFlowProblem.MinimumCostFlowProblemImpl<>(
                 graph, v -> supply[v], a -> capacities[a], a -> 0, a -> costs[a]);
-        MinimumCostFlowAlgorithm.MinimumCostFlow<Integer> result =
-                new CapacityScalingMinimumCostFlow<Integer, Integer>().getMinimumCostFlow(problem);
+        CapacityScalingMinimumCostFlow<Integer, Integer> algorithm = new CapacityScalingMinimumCostFlow<>();
+        MinimumCostFlowAlgorithm.MinimumCostFlow<Integer> result = algorithm.getMinimumCostFlow(problem);
+        for (Map.Entry<Integer, Double> entry : algorithm.getDualSolution().entrySet()) {
+            potential[entry.getKey()] = entry.getValue();
+        }
         for (Map.Entry<Integer, Double> entry : result.getFlowMap().entrySet()) {
             flow[entry.getKey()] = (int) Math.round(entry.getValue());
         }

@@ -36,6 +36,9 @@ public final class MixedPostman {
     /** Single-street direction flips tried in the local search, each one flow solve. */
     static final int FLIPS = 300;
 
+    /** Flip trials are also limited to this many edge-solves in all, so large networks stay fast. */
+    static final int FLIP_WORK = 300_000;
+
     private MixedPostman() {
     }
 
@@ -57,7 +60,7 @@ public final class MixedPostman {
                 along[e] += links[0][e];
                 against[e] += links[1][e];
             }
-            connection = "spanning tree over " + groups.count + " groups, ";
+            connection = groups.count > 1 ? "spanning tree over " + groups.count + " groups, " : "";
         }
         Oriented oriented = inOutDegree(problem, along, against, demand.either());
         evenParity(network, oriented);
@@ -71,32 +74,65 @@ public final class MixedPostman {
                 (forward ? serviceAlong : serviceAgainst)[e] += demand.either()[e];
             }
         }
-        Traversals best = DirectedPostman.balance(problem, serviceAlong, serviceAgainst);
+        DirectedPostman.Balanced best = DirectedPostman.balanced(problem, serviceAlong, serviceAgainst);
         int flips = 0;
         int tried = 0;
-        for (int e = 0; e < m && tried < FLIPS; e++) {
-            if (demand.either()[e] == 0 || network.from(e) == network.to(e)) {
-                continue;
-            }
-            tried++;
-            int k = demand.either()[e];
-            boolean forward = serviceAlong[e] - along[e] >= k;
-            move(forward ? serviceAlong : serviceAgainst, forward ? serviceAgainst : serviceAlong, e, k);
-            Traversals trial = DirectedPostman.balance(problem, serviceAlong, serviceAgainst);
-            if (trial.length(network) < best.length(network) - 1e-9) {
-                best = trial;
-                flips++;
-            } else {
+        int budget = Math.min(FLIPS, Math.max(10, FLIP_WORK / Math.max(1, m)));
+        boolean improved = true;
+        while (improved && tried < budget) {
+            improved = false;
+            for (int e : flipCandidates(network, demand, along, serviceAlong, best.potential())) {
+                if (tried == budget) {
+                    break;
+                }
+                tried++;
+                int k = demand.either()[e];
+                boolean forward = serviceAlong[e] - along[e] >= k;
+                move(forward ? serviceAlong : serviceAgainst, forward ? serviceAgainst : serviceAlong, e, k);
+                DirectedPostman.Balanced trial = DirectedPostman.balanced(problem, serviceAlong, serviceAgainst);
+                if (trial.traversals().length(network) < best.traversals().length(network) - 1e-9) {
+                    best = trial;
+                    flips++;
+                    improved = true;
+                    break;
+                }
                 move(forward ? serviceAgainst : serviceAlong, forward ? serviceAlong : serviceAgainst, e, k);
             }
         }
         double service = demand.length(network);
-        double total = best.length(network);
+        double total = best.traversals().length(network);
         double bound = lowerBound(problem);
         String method = "mixed postman, heuristic (" + connection + "Frederickson's MIXED2 orientation, "
                 + "exact re-balancing by minimum-cost flow, " + flips + " of " + tried + " direction flips kept)";
-        return new Augmentation(best, total - service, UndirectedPostman.oddNodes(network).length, method,
+        return new Augmentation(best.traversals(), total - service, UndirectedPostman.oddNodes(network).length, method,
                 total <= bound + 1e-9 * Math.max(1, total), bound);
+    }
+
+    /**
+     * Two-way service passes whose flip might shorten the tour, most promising first. Flipping a pass
+     * u&rarr;v needs two more units of deadhead from u to v, which costs at least 2 (p[u] - p[v]) for the
+     * flow's potentials p: only passes with p[v] &gt; p[u] can gain, by at most 2 (p[v] - p[u]).
+     */
+    private static int[] flipCandidates(StreetNetwork network, ServiceDemand demand, int[] base, int[] serviceAlong,
+                                        double[] p) {
+        int m = network.edgeCount();
+        double[] gain = new double[m];
+        List<Integer> candidates = new ArrayList<>();
+        for (int e = 0; e < m; e++) {
+            int k = demand.either()[e];
+            if (k == 0 || network.from(e) == network.to(e)) {
+                continue;
+            }
+            boolean forward = serviceAlong[e] - base[e] >= k;
+            int u = forward ? network.from(e) : network.to(e);
+            int v = network.other(e, u);
+            gain[e] = p[v] - p[u];
+            if (gain[e] > 1e-9) {
+                candidates.add(e);
+            }
+        }
+        candidates.sort((a, b) -> gain[a] != gain[b] ? Double.compare(gain[b], gain[a]) : Integer.compare(a, b));
+        return candidates.stream().mapToInt(Integer::intValue).toArray();
     }
 
     private static void move(int[] from, int[] to, int e, int k) {
