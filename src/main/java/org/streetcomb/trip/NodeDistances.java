@@ -2,14 +2,15 @@ package org.streetcomb.trip;
 
 import java.util.Arrays;
 import org.streetcomb.network.DijkstraSearch;
+import org.streetcomb.network.Heading;
 import org.streetcomb.network.StreetNetwork;
 
 /**
  * Shortest-path distances between the nodes that matter for trips (the depot and the ends of every
  * task), one full Dijkstra search ({@link DijkstraSearch}) from each, kept as a dense table indexed by
  * those nodes. Memory is (nodes of interest)^2 doubles, so the table is built only up to
- * {@link #MAX_NODES} nodes of interest; beyond that the caller splits without local improvement. The
- * network is undirected, so the table is symmetric.
+ * {@link #MAX_NODES} nodes of interest; beyond that the caller splits without local improvement. Searches
+ * follow one-way streets only their permitted way, so the table is not symmetric where there are any.
  */
 final class NodeDistances implements Distances {
 
@@ -39,7 +40,7 @@ final class NodeDistances implements Distances {
         }
         double[] table = new double[k * k];
         Arrays.fill(table, Double.POSITIVE_INFINITY);
-        DijkstraSearch search = new DijkstraSearch(network);
+        DijkstraSearch search = new DijkstraSearch(network, Heading.OUTBOUND);
         for (int i = 0; i < k; i++) {
             search.start(nodes[i]);
             int found = 0;

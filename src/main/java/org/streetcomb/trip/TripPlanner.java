@@ -5,6 +5,7 @@ import java.util.BitSet;
 import java.util.List;
 import java.util.Random;
 import org.streetcomb.network.DijkstraSearch;
+import org.streetcomb.network.Heading;
 import org.streetcomb.network.StreetNetwork;
 import org.streetcomb.tour.Tour;
 import org.streetcomb.tour.TourValidator;
@@ -235,7 +236,7 @@ public final class TripPlanner {
 
     /** The trips as tours: shortest paths between the services, every trip checked. */
     private List<Trip> trips(Tasks tasks, List<int[]> refs) {
-        DijkstraSearch search = new DijkstraSearch(network);
+        DijkstraSearch search = new DijkstraSearch(network, Heading.OUTBOUND);
         List<Trip> trips = new ArrayList<>();
         for (int[] trip : refs) {
             List<int[]> steps = new ArrayList<>();

@@ -4,6 +4,8 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.ObjectMapper;
 import java.io.PrintWriter;
 import java.io.StringWriter;
 import java.nio.file.Files;
@@ -44,6 +46,36 @@ class FieldOutputOptionsTest {
         String json = out.toString();
         assertTrue(json.contains("\"trips\""), json);
         assertFalse(json.contains("\"over_limit\" : true"), "every trip fits 1.5 h");
+    }
+
+    /**
+     * On real streets with one-way restrictions (central Vienna, OpenStreetMap; fixtures/benchmarks/mixed-osm,
+     * see NOTICE) the mixed postman's tour is reordered and cut into trips without driving a one-way street
+     * the wrong way: every tour and trip is checked by TourValidator, which fails the run (exit 1) otherwise.
+     */
+    @Test
+    void oneWayStreetsSurviveTheReorderAndTheTrips() throws Exception {
+        String[] base = {"plan", "fixtures/benchmarks/mixed-osm/vienna-a.geojson", "--leave-out-cut-off",
+            "--depot-part-only", "--json"};
+        JsonNode plain = runJson(base, "--plain-order");
+        JsonNode ordered = runJson(base);
+        assertEquals(plain.at("/totals/tour_m").decimalValue(), ordered.at("/totals/tour_m").decimalValue());
+        assertTrue(ordered.at("/field/turns/u_turns").asInt() <= plain.at("/field/turns/u_turns").asInt());
+        JsonNode trips = runJson(base, "--max-trip-km", "5", "--trip-restarts", "1");
+        assertTrue(trips.at("/field/trips").size() >= 2, trips.toString());
+        for (JsonNode trip : trips.at("/field/trips")) {
+            assertTrue(trip.get("length_m").asDouble() <= 5000 || trip.get("over_limit").asBoolean());
+        }
+    }
+
+    private static JsonNode runJson(String[] base, String... more) throws Exception {
+        String[] args = java.util.stream.Stream.concat(java.util.Arrays.stream(base), java.util.Arrays.stream(more))
+                .toArray(String[]::new);
+        StringWriter out = new StringWriter();
+        StringWriter err = new StringWriter();
+        int code = Main.run(args, new PrintWriter(out), new PrintWriter(err));
+        assertEquals(ExitCode.OK, code, err.toString());
+        return new ObjectMapper().readTree(out.toString());
     }
 
     @Test
