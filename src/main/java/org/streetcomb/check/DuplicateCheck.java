@@ -5,6 +5,7 @@ import java.util.Arrays;
 import java.util.BitSet;
 import java.util.List;
 import java.util.Locale;
+import java.util.TreeMap;
 import org.locationtech.jts.algorithm.distance.DiscreteHausdorffDistance;
 import org.streetcomb.network.StreetNetwork;
 
@@ -23,18 +24,27 @@ public final class DuplicateCheck implements Detector {
     @Override
     public List<Finding> find(CheckInput input) {
         StreetNetwork network = input.network();
-        List<Finding> findings = new ArrayList<>();
         int[] original = originals(input);
+        // one finding per pair of features: the copy's feature first, then the original's, in layer order
+        TreeMap<Long, List<Integer>> byPair = new TreeMap<>();
+        long features = network.features().size();
         for (int e = 0; e < original.length; e++) {
-            if (original[e] < 0) {
-                continue;
+            if (original[e] >= 0) {
+                byPair.computeIfAbsent(network.featureIndex(e) * features + network.featureIndex(original[e]),
+                        k -> new ArrayList<>()).add(e);
             }
-            String id = network.feature(e).id();
-            String first = network.feature(original[e]).id();
-            findings.add(new Finding(FindingKind.DUPLICATE, Severity.WARNING, Places.edge(network, e),
-                    Places.featureIds(network, original[e], e), network.length(e), "m",
-                    String.format(Locale.ROOT, "%.1f m of feature %s repeats %s", network.length(e), id,
-                            id.equals(first) ? "another part of itself" : "feature " + first),
+        }
+        List<Finding> findings = new ArrayList<>();
+        for (List<Integer> group : byPair.values()) {
+            int[] edges = group.stream().mapToInt(Integer::intValue).toArray();
+            String id = network.feature(edges[0]).id();
+            String first = network.feature(original[edges[0]]).id();
+            double length = Places.length(network, edges);
+            findings.add(new Finding(FindingKind.DUPLICATE, Severity.WARNING, Places.edges(network, edges),
+                    Places.featureIds(network, original[edges[0]], edges[0]), length, "m",
+                    String.format(Locale.ROOT, "%.1f m of feature %s repeats %s", length, id,
+                            id.equals(first) ? "another part of itself" : "feature " + first)
+                            + (edges.length == 1 ? "" : " in " + edges.length + " pieces"),
                     "delete the repeated part of feature " + id + ", or plan with --drop-duplicates"));
         }
         return findings;

@@ -9,7 +9,7 @@ import java.util.List;
  */
 public final class NetworkCheck {
 
-    private static final List<Detector> DETECTORS = List.of(
+    static final List<Detector> DETECTORS = List.of(
             new SeparatePartCheck(), new OneWayTrapCheck(), new DepotReachCheck(), new UndershootCheck(),
             new OvershootCheck(), new DuplicateCheck(), new CrossingCheck(), new DegenerateCheck(), new DroppedCheck());
 

@@ -1,11 +1,14 @@
 package org.streetcomb.check;
 
 import java.nio.file.Path;
+import java.util.HashMap;
 import java.util.List;
+import java.util.Map;
 import java.util.stream.Collectors;
 import org.streetcomb.network.NetworkBuilder;
 import org.streetcomb.network.StreetNetwork;
-import org.streetcomb.read.GeoJsonReader;
+import org.streetcomb.read.LayerReaders;
+import org.streetcomb.read.ReadOptions;
 import org.streetcomb.read.RoadFeature;
 import org.streetcomb.read.RoadLayer;
 import org.streetcomb.read.Travel;
@@ -13,11 +16,25 @@ import org.streetcomb.read.Travel;
 /** Reads test layers from fixtures/ and runs the health check on them. */
 final class Layers {
 
+    private static final Map<String, RoadLayer> READ = new HashMap<>();
+
     private Layers() {
     }
 
     static RoadLayer read(String fixture) {
-        return new GeoJsonReader().read(Path.of("fixtures", fixture));
+        return read(fixture, null);
+    }
+
+    /**
+     * Each layer is read once per test run: projected shapefiles are slow to read.
+     *
+     * @param crs the layer's CRS as EPSG:code, or null for the file's own
+     */
+    static synchronized RoadLayer read(String fixture, String crs) {
+        ReadOptions d = ReadOptions.DEFAULTS;
+        return READ.computeIfAbsent(fixture + " " + crs, key -> LayerReaders.read(Path.of("fixtures", fixture),
+                new ReadOptions(d.nameField(), d.onewayField(), d.onewayForward(), d.onewayBackward(), d.onewayBoth(),
+                        List.of(), List.of(), null, d.mode(), false, false, crs)));
     }
 
     /** The layer's lines with {@code oneway=yes} read as one-way along the line, the others two-way. */
