@@ -9,6 +9,7 @@ import org.streetcomb.network.LocalFrame;
 import org.streetcomb.network.StreetNetwork;
 import org.streetcomb.read.ReadReport;
 import org.streetcomb.read.RoadFeature;
+import org.streetcomb.read.RoadLayer;
 
 /**
  * What the detectors look at: the road lines as read, the network built from them, and a metric plane
@@ -19,8 +20,7 @@ public final class CheckInput {
 
     private static final GeometryFactory METRIC = new GeometryFactory();
 
-    private final List<RoadFeature> features;
-    private final ReadReport read;
+    private final RoadLayer layer;
     private final StreetNetwork network;
     private final CheckOptions options;
     private final int depot;
@@ -29,27 +29,33 @@ public final class CheckInput {
     private STRtree edgeIndex;
 
     /**
-     * @param features the road lines the network was built from
-     * @param read     the reader's account of the layer
-     * @param network  the network built from {@code features}
-     * @param options  thresholds
-     * @param depot    the depot node, or -1 when there is none
+     * @param layer   the road layer the network was built from
+     * @param network the network built from {@code layer}
+     * @param options thresholds
+     * @param depot   the depot node, or -1 when there is none
      */
-    public CheckInput(List<RoadFeature> features, ReadReport read, StreetNetwork network, CheckOptions options, int depot) {
-        this.features = features;
-        this.read = read;
+    public CheckInput(RoadLayer layer, StreetNetwork network, CheckOptions options, int depot) {
+        this.layer = layer;
         this.network = network;
         this.options = options;
         this.depot = depot;
-        this.frame = LocalFrame.covering(features);
+        this.frame = LocalFrame.covering(layer.features());
     }
 
     public List<RoadFeature> features() {
-        return features;
+        return layer.features();
     }
 
     public ReadReport read() {
-        return read;
+        return layer.report();
+    }
+
+    /**
+     * Whether the network joins lines wherever they cross (a geometric layer noded without grade
+     * separation), rather than only at shared nodes or vertices.
+     */
+    public boolean joinsCrossings() {
+        return !layer.hasTopology() && layer.gradeSeparation() == null;
     }
 
     public StreetNetwork network() {

@@ -16,9 +16,10 @@ import org.streetcomb.read.RoadFeature;
 /**
  * Finds lines that cross where neither has a vertex: a proper intersection in JTS's sense, a single point
  * inside a segment of each. In a layer whose junctions are shared vertices (OpenStreetMap and most
- * council layers) such a crossing is a bridge, a tunnel, or a junction someone forgot to draw. The
- * planner joins lines wherever they cross, so a bridge becomes a junction that cannot be driven: the
- * finding is a warning when either line is tagged as a bridge, tunnel or layer, a note otherwise. The
+ * council layers) such a crossing is a bridge, a tunnel, or a junction someone forgot to draw. Unless
+ * the layer is read with its own topology or with grade separation, the planner joins lines wherever they
+ * cross, so a bridge becomes a junction that cannot be driven: the finding is a warning when either line
+ * is tagged as a bridge, tunnel or layer, a note otherwise. The
  * measured value is the crossing angle (0-90 degrees). Candidate segment pairs come from JTS's
  * {@link MCIndexNoder} (monotone chains in an STRtree), run on the lines as read, in metres.
  */
@@ -51,8 +52,10 @@ final class CrossingCheck implements Detector {
                     Places.point(lon, lat), a.id().equals(b.id()) ? List.of(a.id()) : List.of(a.id(), b.id()), c.angle(), "degrees",
                     String.format(Locale.ROOT, "%s at %.0f degrees with no shared vertex%s", pair, c.angle(),
                             tagged != null ? " (" + tagged + ")" : ""),
-                    "the planner joins them here: if one passes over the other, split the layer by level; "
-                            + "if they meet, add a shared vertex"));
+                    input.joinsCrossings()
+                            ? "the planner joins them here: if one passes over the other, plan with --grade-separated "
+                              + "(and --level-field); if they meet, add a shared vertex"
+                            : "the planner keeps them apart: if they meet on the ground, add a shared vertex"));
         }
         return findings;
     }

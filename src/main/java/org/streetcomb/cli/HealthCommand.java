@@ -77,10 +77,10 @@ public final class HealthCommand implements Callable<Integer> {
         CheckOptions options = new CheckOptions(snap, nearMiss, stub, duplicate);
         StageClock clock = new StageClock(TerminalProgress.forCommandLine(quiet, System.err));
         RoadLayer roads = clock.time("read", () -> LayerReaders.read(input, layer.readOptions()));
-        StreetNetwork network = clock.time("network", () -> new NetworkBuilder(snap).build(roads.features()));
+        StreetNetwork network = clock.time("network", () -> new NetworkBuilder(snap).build(roads));
         int depotNode = depot.node(roads, network);
         List<Finding> findings = clock.time("check", () ->
-                NetworkCheck.run(new CheckInput(roads.features(), roads.report(), network, options, depotNode)));
+                NetworkCheck.run(new CheckInput(roads, network, options, depotNode)));
         HealthReport report = new HealthReport(input, roads.report(), network, depotNode, options, findings);
         if (out != null) {
             clock.run("write", () -> new FindingGeoJsonWriter().write(out, findings));

@@ -37,16 +37,15 @@ public final class Planner {
         List<String> warnings = new ArrayList<>();
         StreetNetwork built = clock.time("network", () -> new NetworkBuilder(request.snapTolerance()).build(layer));
         NetworkRepair.Result repaired = repairs.equals(RepairOptions.NONE)
-                ? new NetworkRepair.Result(layer.features(), built, List.of())
-                : clock.time("repair", () -> NetworkRepair.apply(layer.features(), layer.report(), built,
-                        request.snapTolerance(), repairs));
+                ? new NetworkRepair.Result(layer, built, List.of())
+                : clock.time("repair", () -> NetworkRepair.apply(layer, built, request.snapTolerance(), repairs));
         repaired.done().forEach(done -> warnings.add("repaired: " + done));
         StreetNetwork network = repaired.network();
         if (network.edgeCount() == 0) {
             throw new NoTourError(request.input() + ": no street of positive length after noding");
         }
         Components components = Components.of(network);
-        NearestNode.Hit depot = DepotPlacement.place(network, repaired.features(), request.depot(),
+        NearestNode.Hit depot = DepotPlacement.place(network, repaired.layer().features(), request.depot(),
                 request.maxDepotDistance(), request.input());
         if (components.count() > 1) {
             warnings.add(request.depotOnly()

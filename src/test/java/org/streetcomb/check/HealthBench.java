@@ -21,9 +21,9 @@ public final class HealthBench {
         int rounds = args.length > 1 ? Integer.parseInt(args[1]) : 3;
         for (int round = 1; round <= rounds; round++) {
             long t0 = System.nanoTime();
-            StreetNetwork network = new NetworkBuilder(0.5).build(layer.features());
+            StreetNetwork network = new NetworkBuilder(0.5).build(layer);
             double build = (System.nanoTime() - t0) / 1e9;
-            CheckInput input = new CheckInput(layer.features(), layer.report(), network, CheckOptions.DEFAULTS, 0);
+            CheckInput input = new CheckInput(layer, network, CheckOptions.DEFAULTS, 0);
             StringBuilder line = new StringBuilder(String.format(Locale.ROOT,
                     "round %d: %d edges; network build %.2f s (reference)", round, network.edgeCount(), build));
             double total = 0;

@@ -31,10 +31,8 @@ final class Layers {
      * @param crs the layer's CRS as EPSG:code, or null for the file's own
      */
     static synchronized RoadLayer read(String fixture, String crs) {
-        ReadOptions d = ReadOptions.DEFAULTS;
         return READ.computeIfAbsent(fixture + " " + crs, key -> LayerReaders.read(Path.of("fixtures", fixture),
-                new ReadOptions(d.nameField(), d.onewayField(), d.onewayForward(), d.onewayBackward(), d.onewayBoth(),
-                        List.of(), List.of(), null, d.mode(), false, false, crs)));
+                crs == null ? ReadOptions.DEFAULTS : ReadOptions.DEFAULTS.withCrs(crs)));
     }
 
     /** The layer's lines with {@code oneway=yes} read as one-way along the line, the others two-way. */
@@ -46,8 +44,9 @@ final class Layers {
     }
 
     static List<Finding> check(RoadLayer layer, List<RoadFeature> features, int depot) {
-        StreetNetwork network = new NetworkBuilder(CheckOptions.DEFAULTS.snap()).build(features);
-        return NetworkCheck.run(new CheckInput(features, layer.report(), network, CheckOptions.DEFAULTS, depot));
+        RoadLayer lines = new RoadLayer(layer.source(), features, layer.report(), layer.endNodes(), layer.gradeSeparation());
+        StreetNetwork network = new NetworkBuilder(CheckOptions.DEFAULTS.snap()).build(lines);
+        return NetworkCheck.run(new CheckInput(lines, network, CheckOptions.DEFAULTS, depot));
     }
 
     static List<Finding> ofKind(List<Finding> findings, FindingKind kind) {
