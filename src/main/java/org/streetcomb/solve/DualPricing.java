@@ -24,12 +24,14 @@ import org.streetcomb.network.StreetNetwork;
  * different groups of a level are priced there, so each pair is priced once, at its own level.
  *
  * <p>Each level is one Dijkstra search seeded at every member u with label -P(u), where a seed expands
- * only while its label is at most 0 (that is, within radius P(u)), and every network node keeps the two
- * best labels from seeds of distinct groups. If d(u,v) &lt; P(u) + P(v), the two balls meet on a shortest
- * u-v path, and at the meeting node the two best labels sum to less than 0, naming a violated pair. So at
- * least one violated pair is found whenever one exists, and each search only touches the balls, which on
- * street networks are small (a potential is about half a matched path). Blossoms with a zero dual are
- * ignored: they change no reduced cost.
+ * from a node only while its label there is at most 0 (within radius P(u)), so it reaches the first
+ * nodes just past that radius too; every network node keeps the two best labels from seeds of distinct
+ * groups. If d(u,v) &lt; P(u) + P(v), the two balls overlap on a shortest u-v path, possibly inside one
+ * edge; at that edge's far end both labels are present and sum to less than 0, naming a violated pair.
+ * (A seed pruned on the way is dominated by two others that reach the same node.) So at least one
+ * violated pair is found whenever one exists, and each search only touches the balls, which on street
+ * networks are small (a potential is about half a matched path). Blossoms with a zero dual are ignored:
+ * they change no reduced cost.
  */
 final class DualPricing {
 
@@ -118,9 +120,8 @@ final class DualPricing {
             for (int a = network.incidenceStart(v); a < network.incidenceEnd(v); a++) {
                 int e = network.incidentEdge(a);
                 int w = network.other(e, v);
-                double next = label + network.length(e);
-                if (next <= tolerance && (stamp[w] != current || settled[w] < 2)) {
-                    heap.push(next, w, seed);
+                if (stamp[w] != current || settled[w] < 2) {
+                    heap.push(label + network.length(e), w, seed);
                 }
             }
         }

@@ -13,13 +13,13 @@ import java.util.Random;
  * a tenth of them left out at random so the grid has many odd nodes, as real networks do. Junctions are
  * jittered by up to 20 m.
  */
-final class GridLayer {
+public final class GridLayer {
 
     private GridLayer() {
     }
 
     /** A grid of about {@code edges} edges; returns the number of block sides written. */
-    static long write(Path file, int edges, long seed) throws IOException {
+    public static long write(Path file, int edges, long seed) throws IOException {
         int side = (int) Math.ceil(Math.sqrt(edges / 1.9));
         double step = 0.001;
         Random random = new Random(seed);
