@@ -6,6 +6,7 @@ import java.io.OutputStream;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.nio.file.StandardCopyOption;
+import java.nio.file.StandardOpenOption;
 import org.streetcomb.InputError;
 
 /**
@@ -31,8 +32,11 @@ public final class AtomicFile {
         }
         Path temporary = null;
         try {
-            temporary = Files.createTempFile(folder, "." + absolute.getFileName(), ".part");
-            try (OutputStream out = new BufferedOutputStream(Files.newOutputStream(temporary), 1 << 16)) {
+            // not Files.createTempFile: it makes the file private (0600), and outputs are shared files
+            temporary = folder.resolve("." + absolute.getFileName() + "." + ProcessHandle.current().pid() + "."
+                    + System.nanoTime() + ".part");
+            try (OutputStream out = new BufferedOutputStream(
+                    Files.newOutputStream(temporary, StandardOpenOption.CREATE_NEW, StandardOpenOption.WRITE), 1 << 16)) {
                 body.writeTo(out);
             }
             Files.move(temporary, absolute, StandardCopyOption.REPLACE_EXISTING, StandardCopyOption.ATOMIC_MOVE);
