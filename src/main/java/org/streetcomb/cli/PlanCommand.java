@@ -93,6 +93,9 @@ public final class PlanCommand implements Callable<Integer> {
         PlanSummary.Section fieldSection = field.write(plan, clock);
         PlanSummary summary = PlanSummary.of(plan, clock.stages(), out);
         summary.add(fieldSection);
+        if (report.requested()) {
+            summary.add(report.section());
+        }
         report.write("Plan: " + input.getFileName(), PlanLayers.of(plan), PlanLayers.groups(plan), summary.json(), clock);
         stdout.print(json ? summary.toJson() : summary.toText());
         stdout.flush();

@@ -1,6 +1,8 @@
 package org.streetcomb.cli;
 
 import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.ObjectMapper;
+import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
@@ -94,9 +96,31 @@ final class ReportOptions {
                 "--quicklook-size must be WIDTHxHEIGHT from 200x150 to 8000x8000 pixels, e.g. 1200x800; got '" + pngSize + "'");
     }
 
+    /** Whether any report file was asked for. */
+    boolean requested() {
+        return html != null || png != null;
+    }
+
+    /** The summary's account of the report files, added before they are written so the page shows it too. */
+    PlanSummary.Section section() {
+        ObjectNode json = new ObjectMapper().createObjectNode();
+        List<String[]> lines = new ArrayList<>();
+        if (html != null) {
+            json.put("html", html.toString());
+            json.put("display_tolerance_m", displayTolerance);
+            lines.add(new String[] {"Report", html + (basemap == null ? "" : " (basemap tiles need the network)")});
+        }
+        if (png != null) {
+            json.put("picture", png.toString());
+            json.put("picture_size", pngSize);
+            lines.add(new String[] {"Picture", png + " (" + pngSize + " pixels)"});
+        }
+        return new PlanSummary.Section("report", json, lines);
+    }
+
     /** Writes the report files asked for; does nothing when none is. */
     void write(String title, List<MapLayer> layers, List<MapGroup> groups, JsonNode summary, StageClock clock) {
-        if (html == null && png == null) {
+        if (!requested()) {
             return;
         }
         MapReport report = new MapReport(title, layers, groups, summary, run(), CAUTIONS,

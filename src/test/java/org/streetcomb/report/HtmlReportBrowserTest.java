@@ -7,6 +7,8 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
 import java.io.PrintWriter;
+import java.net.InetAddress;
+import java.net.ServerSocket;
 import java.io.StringWriter;
 import java.math.BigDecimal;
 import java.nio.charset.StandardCharsets;
@@ -138,11 +140,39 @@ class HtmlReportBrowserTest {
         assertFalse(page.contains("<img src=x"), "the raw hostile file name must not appear in the file");
     }
 
-    private static JsonNode plan(Path layer, Path html) throws Exception {
+    @Test
+    void basemapTilesComeOnlyFromTheGivenHostAndItsCreditIsText() throws Exception {
+        // a loopback port that was free a moment ago refuses connections: the page asks for tiles, nothing leaves
+        int port;
+        try (ServerSocket probe = new ServerSocket(0, 1, InetAddress.getLoopbackAddress())) {
+            port = probe.getLocalPort();
+        }
+        Path html = folder.resolve("basemap.html");
+        plan(DEMO, html, "--basemap", "http://127.0.0.1:" + port + "/{z}/{x}/{y}.png", "--basemap-credit", "<b>Tiles</b> by Example");
+        chromium.open(html);
+        JsonNode credit = chromium.eval("(() => { const a = document.querySelector('.leaflet-control-attribution');"
+                + " return {text: a.textContent, bold: a.querySelectorAll('b').length}; })()");
+        assertTrue(credit.get("text").asText().contains("<b>Tiles</b> by Example"), credit.toString());
+        assertEquals(0, credit.get("bold").asInt(), "the credit is text, not markup");
+        // wait for the tile requests to fail, then check what was asked for and what the policy said
+        Thread.sleep(500);
+        List<String> requests = chromium.networkRequests();
+        assertFalse(requests.isEmpty(), "tiles were requested");
+        for (String url : requests) {
+            assertTrue(url.matches("http://127\\.0\\.0\\.1:" + port + "/\\d+/\\d+/\\d+\\.png"), url);
+        }
+        for (String problem : chromium.problems()) {
+            assertTrue(problem.contains("net::ERR_CONNECTION_REFUSED"), "only the refused tiles may be logged: " + problem);
+        }
+    }
+
+    private static JsonNode plan(Path layer, Path html, String... more) throws Exception {
         StringWriter out = new StringWriter();
         StringWriter err = new StringWriter();
-        int code = Main.run(new String[] {"plan", layer.toString(), "--depot=-31.2,44.6", "--report", html.toString(), "--json",
-            "--quiet"}, new PrintWriter(out), new PrintWriter(err));
+        List<String> args = new java.util.ArrayList<>(List.of("plan", layer.toString(), "--depot=-31.2,44.6", "--report",
+                html.toString(), "--json", "--quiet"));
+        args.addAll(List.of(more));
+        int code = Main.run(args.toArray(new String[0]), new PrintWriter(out), new PrintWriter(err));
         assertEquals(0, code, err.toString());
         return MAPPER.readTree(out.toString());
     }
