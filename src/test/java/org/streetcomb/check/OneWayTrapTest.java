@@ -11,6 +11,7 @@ import java.util.Map;
 import java.util.Random;
 import java.util.Set;
 import org.jgrapht.Graph;
+import org.jgrapht.alg.connectivity.ConnectivityInspector;
 import org.jgrapht.alg.connectivity.KosarajuStrongConnectivityInspector;
 import org.jgrapht.graph.DirectedPseudograph;
 import org.junit.jupiter.params.ParameterizedTest;
@@ -18,6 +19,7 @@ import org.junit.jupiter.params.provider.ValueSource;
 import org.junit.jupiter.api.Test;
 import org.locationtech.jts.geom.Coordinate;
 import org.locationtech.jts.geom.GeometryFactory;
+import org.streetcomb.network.Heading;
 import org.streetcomb.network.NetworkBuilder;
 import org.streetcomb.network.StreetNetwork;
 import org.streetcomb.read.RoadFeature;
@@ -28,7 +30,8 @@ import org.streetcomb.read.Travel;
  * One-way traps and depot reach. The planted fixture (fixtures/check/oneway-trap.geojson, invented) is a
  * two-way grid with a one-way dead-end spur; the strong components on seeded random one-way grids are
  * checked against JGraphT's {@link KosarajuStrongConnectivityInspector} (an independent algorithm in a
- * reference library), and the traps against the sources and sinks of its condensation.
+ * reference library), and the traps, there and on a real OpenStreetMap network, against the sources and
+ * sinks of its condensation.
  */
 class OneWayTrapTest {
 
@@ -70,20 +73,8 @@ class OneWayTrapTest {
     @ValueSource(longs = {1, 2, 3, 4, 5, 6, 7, 8})
     void strongComponentsAndTrapsAgreeWithJGraphT(long seed) {
         StreetNetwork network = randomOneWayGrid(new Random(seed), 9, 7, 0.35);
-        TravelArcs arcs = new TravelArcs(network);
-        StrongComponents ours = StrongComponents.of(network, arcs);
-
-        Graph<Integer, Integer> graph = new DirectedPseudograph<>(null, null, false);
-        for (int v = 0; v < network.nodeCount(); v++) {
-            if (network.degree(v) > 0) {
-                graph.addVertex(v);
-            }
-        }
-        for (int a = 0; a < 2 * network.edgeCount(); a++) {
-            if (arcs.allowed(a)) {
-                graph.addEdge(arcs.tail(a), arcs.head(a), a);
-            }
-        }
+        StrongComponents ours = StrongComponents.of(network, new TravelArcs(network));
+        Graph<Integer, Integer> graph = drivable(network);
         List<Set<Integer>> theirs = new KosarajuStrongConnectivityInspector<>(graph).stronglyConnectedSets();
         assertEquals(theirs.size(), ours.count());
         for (Set<Integer> set : theirs) {
@@ -91,16 +82,56 @@ class OneWayTrapTest {
             set.forEach(v -> labels.add(ours.of(v)));
             assertEquals(1, labels.size(), "one of our components per JGraphT component");
         }
+        assertEquals(trapsByJGraphT(graph), new OneWayTrapCheck().find(network).size());
+    }
 
-        // sources and sinks of JGraphT's condensation, minus the largest component (the grid is connected)
+    /**
+     * A real one-way network: OpenStreetMap roads of central Aguascalientes (fixtures/osm, ODbL, see
+     * NOTICE), read with the OSM one-way rules; its one-way streets cut at the edge of the extract are
+     * traps. The count must be JGraphT's.
+     */
+    @Test
+    void trapsOnARealOneWayNetworkAgreeWithJGraphT() {
+        RoadLayer layer = Layers.read("osm/aguascalientes.osm.pbf");
+        StreetNetwork network = new NetworkBuilder(0.5).build(layer);
+        int traps = new OneWayTrapCheck().find(network).size();
+        assertTrue(traps > 0, "the extract has one-way streets cut at its edge");
+        assertEquals(trapsByJGraphT(drivable(network)), traps);
+    }
+
+    /** The drivable arcs as a JGraphT graph, from the network's travel directions ({@link Heading}). */
+    private static Graph<Integer, Integer> drivable(StreetNetwork network) {
+        Graph<Integer, Integer> graph = new DirectedPseudograph<>(null, null, false);
+        for (int v = 0; v < network.nodeCount(); v++) {
+            if (network.degree(v) > 0) {
+                graph.addVertex(v);
+            }
+        }
+        for (int e = 0; e < network.edgeCount(); e++) {
+            if (Heading.OUTBOUND.allows(network, e, network.from(e))) {
+                graph.addEdge(network.from(e), network.to(e), 2 * e);
+            }
+            if (Heading.OUTBOUND.allows(network, e, network.to(e))) {
+                graph.addEdge(network.to(e), network.from(e), 2 * e + 1);
+            }
+        }
+        return graph;
+    }
+
+    /**
+     * Sources and sinks of JGraphT's condensation (Kosaraju), in each weakly connected part (JGraphT's
+     * ConnectivityInspector) with more than one strong component, less the part's largest.
+     */
+    private static int trapsByJGraphT(Graph<Integer, Integer> graph) {
+        List<Set<Integer>> strong = new KosarajuStrongConnectivityInspector<>(graph).stronglyConnectedSets();
         Map<Integer, Integer> setOf = new HashMap<>();
-        for (int s = 0; s < theirs.size(); s++) {
-            for (int v : theirs.get(s)) {
+        for (int s = 0; s < strong.size(); s++) {
+            for (int v : strong.get(s)) {
                 setOf.put(v, s);
             }
         }
-        boolean[] in = new boolean[theirs.size()];
-        boolean[] out = new boolean[theirs.size()];
+        boolean[] in = new boolean[strong.size()];
+        boolean[] out = new boolean[strong.size()];
         for (Integer a : graph.edgeSet()) {
             int s = setOf.get(graph.getEdgeSource(a));
             int t = setOf.get(graph.getEdgeTarget(a));
@@ -109,19 +140,22 @@ class OneWayTrapTest {
                 in[t] = true;
             }
         }
-        int largest = 0;
-        for (int s = 1; s < theirs.size(); s++) {
-            if (theirs.get(s).size() > theirs.get(largest).size()) {
-                largest = s;
+        int traps = 0;
+        for (Set<Integer> part : new ConnectivityInspector<>(graph).connectedSets()) {
+            List<Integer> inPart = new ArrayList<>();
+            for (int s = 0; s < strong.size(); s++) {
+                if (part.contains(strong.get(s).iterator().next())) {
+                    inPart.add(s);
+                }
+            }
+            int largest = inPart.stream().max((x, y) -> Integer.compare(strong.get(x).size(), strong.get(y).size())).orElseThrow();
+            for (int s : inPart) {
+                if (inPart.size() > 1 && s != largest && (!in[s] || !out[s])) {
+                    traps++;
+                }
             }
         }
-        int expected = 0;
-        for (int s = 0; s < theirs.size(); s++) {
-            if (theirs.size() > 1 && s != largest && (!in[s] || !out[s])) {
-                expected++;
-            }
-        }
-        assertEquals(expected, new OneWayTrapCheck().find(network).size());
+        return traps;
     }
 
     /** A connected grid of two-way and one-way streets; the first row stays two-way to keep it connected. */
