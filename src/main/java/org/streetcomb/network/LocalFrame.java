@@ -4,10 +4,10 @@ import java.util.List;
 import org.streetcomb.read.RoadFeature;
 
 /**
- * An equirectangular plane in metres around a centre point, used to node lines and simplify them with a tolerance in
- * metres that is the same east-west and north-south. Over a district (tens of kilometres) its scale
- * error stays well below the snap tolerance's meaning; lengths are never measured in it. Lines that
- * cross the antimeridian are not supported.
+ * An equirectangular plane in metres around a centre point, used to node lines and simplify them with a
+ * tolerance in metres that is the same east-west and north-south, and to find streets near GPS fixes. Over
+ * a district (tens of kilometres) its scale error stays well below the tolerances it serves; lengths are
+ * never measured in it. Lines that cross the antimeridian are not supported.
  */
 public record LocalFrame(double lon0, double lat0, double metresPerDegreeLon, double metresPerDegreeLat) {
 

@@ -1,0 +1,22 @@
+package org.streetcomb.coverage;
+
+import java.nio.file.Path;
+import java.util.List;
+
+/**
+ * What to check.
+ *
+ * @param layer          the road layer
+ * @param tracks         GPX files of the drive, in any order
+ * @param snapTolerance  vertices closer than this many metres are joined when the network is built
+ * @param matching       map-matching parameters
+ * @param threshold      share of a street's need that counts as covered, in (0, 1]
+ * @param bothKerbs      each two-way street must be driven once in each direction
+ */
+public record AuditRequest(Path layer, List<Path> tracks, double snapTolerance, MatchSettings matching,
+                           double threshold, boolean bothKerbs) {
+
+    public AuditRequest {
+        tracks = List.copyOf(tracks);
+    }
+}

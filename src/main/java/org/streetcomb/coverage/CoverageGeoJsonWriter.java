@@ -1,0 +1,126 @@
+package org.streetcomb.coverage;
+
+import com.fasterxml.jackson.core.JsonEncoding;
+import com.fasterxml.jackson.core.JsonFactory;
+import com.fasterxml.jackson.core.JsonGenerator;
+import java.io.IOException;
+import java.math.BigDecimal;
+import java.math.RoundingMode;
+import java.nio.file.Path;
+import java.util.Locale;
+import org.locationtech.jts.geom.Coordinate;
+import org.streetcomb.network.StreetNetwork;
+import org.streetcomb.read.RoadFeature;
+import org.streetcomb.write.AtomicFile;
+
+/**
+ * Writes coverage as GeoJSON FeatureCollections (RFC 7946, no {@code crs} member, longitude/latitude with
+ * at most 7 decimals) for a map viewer: one layer of streets with their status and driven share, and one
+ * of the missed parts as lines drawn in the direction they must still be driven ({@code way} = either,
+ * along or against the street's digitised direction). Lengths are metres with 3 decimals, shares 0..1
+ * with 4. Files are written through {@link AtomicFile}.
+ */
+public final class CoverageGeoJsonWriter {
+
+    private CoverageGeoJsonWriter() {
+    }
+
+    public static void writeStreets(Path target, CoverageReport report) {
+        write(target, json -> {
+            for (StreetCoverage street : report.streets()) {
+                RoadFeature f = street.feature();
+                json.writeStartObject();
+                json.writeStringField("type", "Feature");
+                json.writeObjectFieldStart("properties");
+                json.writeStringField("feature_id", f.id());
+                json.writeStringField("street", f.name());
+                json.writeStringField("status", street.status().label());
+                json.writeNumberField("fraction", round(street.fraction(), 4));
+                json.writeNumberField("length_m", round(street.length(), 3));
+                json.writeNumberField("needed_m", round(street.needed(), 3));
+                json.writeNumberField("driven_m", round(street.driven(), 3));
+                json.writeNumberField("wrong_way_m", round(street.wrongWay(), 3));
+                json.writeStringField("travel", f.travel().name().toLowerCase(Locale.ROOT));
+                json.writeEndObject();
+                Coordinate[] coords = f.line().getCoordinates();
+                double[] packed = new double[2 * coords.length];
+                for (int i = 0; i < coords.length; i++) {
+                    packed[2 * i] = coords[i].x;
+                    packed[2 * i + 1] = coords[i].y;
+                }
+                lineString(json, packed);
+                json.writeEndObject();
+            }
+        });
+    }
+
+    public static void writeMissed(Path target, CoverageReport report) {
+        StreetNetwork network = report.network();
+        write(target, json -> {
+            for (MissedPart part : report.missed()) {
+                RoadFeature f = network.feature(part.edge());
+                json.writeStartObject();
+                json.writeStringField("type", "Feature");
+                json.writeObjectFieldStart("properties");
+                json.writeStringField("feature_id", f.id());
+                json.writeStringField("street", f.name());
+                json.writeNumberField("edge", part.edge());
+                json.writeStringField("way", part.way().label());
+                json.writeNumberField("length_m", round(part.length(), 3));
+                json.writeEndObject();
+                lineString(json, EdgeSlice.of(network, part.edge(), part.from(), part.to(),
+                        part.way() == MissedPart.Way.AGAINST));
+                json.writeEndObject();
+            }
+        });
+    }
+
+    @FunctionalInterface
+    private interface Features {
+        void write(JsonGenerator json) throws IOException;
+    }
+
+    private static void write(Path target, Features features) {
+        AtomicFile.write(target, out -> {
+            try (JsonGenerator json = new JsonFactory().createGenerator(out, JsonEncoding.UTF8)
+                    .enable(JsonGenerator.Feature.WRITE_BIGDECIMAL_AS_PLAIN)) {
+                json.writeStartObject();
+                json.writeStringField("type", "FeatureCollection");
+                json.writeArrayFieldStart("features");
+                features.write(json);
+                json.writeEndArray();
+                json.writeEndObject();
+                json.writeRaw('\n');
+            }
+        });
+    }
+
+    private static void lineString(JsonGenerator json, double[] lonLat) throws IOException {
+        json.writeObjectFieldStart("geometry");
+        json.writeStringField("type", "LineString");
+        json.writeArrayFieldStart("coordinates");
+        BigDecimal lastLon = null, lastLat = null;
+        int written = 0;
+        for (int i = 0; i < lonLat.length; i += 2) {
+            BigDecimal x = round(lonLat[i], 7).stripTrailingZeros();
+            BigDecimal y = round(lonLat[i + 1], 7).stripTrailingZeros();
+            // a repeated position would make a degenerate segment; keep one, but always keep two positions
+            if (x.equals(lastLon) && y.equals(lastLat) && !(i == lonLat.length - 2 && written == 1)) {
+                continue;
+            }
+            json.writeStartArray();
+            json.writeNumber(x);
+            json.writeNumber(y);
+            json.writeEndArray();
+            lastLon = x;
+            lastLat = y;
+            written++;
+        }
+        json.writeEndArray();
+        json.writeEndObject();
+    }
+
+    private static BigDecimal round(double value, int decimals) {
+        return BigDecimal.valueOf(value).setScale(decimals, RoundingMode.HALF_EVEN);
+    }
+}

@@ -1,0 +1,101 @@
+package org.streetcomb.coverage;
+
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+import org.streetcomb.InputError;
+import org.streetcomb.network.NetworkBuilder;
+import org.streetcomb.network.StreetNetwork;
+import org.streetcomb.plan.StageClock;
+import org.streetcomb.read.GpxContents;
+import org.streetcomb.read.GpxTrackReader;
+import org.streetcomb.read.LayerReaders;
+import org.streetcomb.read.RoadLayer;
+
+/**
+ * Runs a coverage check: reads the layer and builds its network, streams every GPX file segment by segment
+ * through {@link TrackCleaner} and {@link HmmMapMatcher} into {@link DrivenIntervals}, and accounts the
+ * result per street with {@link StreetCoverageAccounting}. Memory is bounded by the network and the longest
+ * segment window, not by the size of the tracks.
+ */
+public final class DriveAudit {
+
+    private DriveAudit() {
+    }
+
+    public static Audit run(AuditRequest request, StageClock clock) {
+        RoadLayer layer = clock.time("read", () -> LayerReaders.read(request.layer()));
+        StreetNetwork network = clock.time("network",
+                () -> new NetworkBuilder(request.snapTolerance()).build(layer.features()));
+        if (network.edgeCount() == 0) {
+            throw InputError.at(request.layer(), null, "no street of positive length after noding");
+        }
+        StreetIndex index = clock.time("index", () -> new StreetIndex(network));
+        MatchSettings settings = request.matching();
+        TrackCleaner cleaner = new TrackCleaner(settings.sigma(), settings.maxSpeed());
+        HmmMapMatcher matcher = new HmmMapMatcher(network, index, settings);
+        DrivenIntervals driven = new DrivenIntervals(network);
+        MatchTally tally = new MatchTally();
+        List<TrackFileResult> files = clock.time("match", () -> {
+            List<TrackFileResult> results = new ArrayList<>();
+            for (Path file : request.tracks()) {
+                int matchedBefore = tally.matched;
+                int offBefore = tally.offNetwork;
+                GpxContents contents = new GpxTrackReader().read(file, segment -> {
+                    tally.fixes += segment.size();
+                    TrackCleaner.Result cleaned = cleaner.clean(segment);
+                    tally.backwards += cleaned.backwards();
+                    tally.spikes += cleaned.spikes();
+                    tally.splits += cleaned.splits();
+                    tally.thinned += cleaned.thinned();
+                    for (int[] run : cleaned.runs()) {
+                        matcher.match(segment, run, driven, tally);
+                    }
+                });
+                results.add(new TrackFileResult(file, contents, tally.matched - matchedBefore, tally.offNetwork - offBefore));
+            }
+            return results;
+        });
+        List<String> warnings = new ArrayList<>();
+        checkOverlap(request, files, network, warnings);
+        CoverageReport coverage = clock.time("account", () -> {
+            driven.merge();
+            return StreetCoverageAccounting.account(network, driven, request.threshold(), request.bothKerbs());
+        });
+        return new Audit(request, layer.report(), List.copyOf(files), tally, coverage, List.copyOf(warnings));
+    }
+
+    /** Refuses tracks that miss the network entirely, and warns about single files that do. */
+    private static void checkOverlap(AuditRequest request, List<TrackFileResult> files, StreetNetwork network,
+                                     List<String> warnings) {
+        int points = files.stream().mapToInt(f -> f.contents().points()).sum();
+        if (points == 0) {
+            throw new InputError(files.size() == 1
+                    ? InputError.at(files.get(0).file(), null, "no track points (<trkpt>): nothing to check").getMessage()
+                    : "none of the " + files.size() + " GPX files holds a track point (<trkpt>): nothing to check");
+        }
+        int matched = files.stream().mapToInt(TrackFileResult::matched).sum();
+        if (matched == 0) {
+            throw new InputError(String.format(Locale.ROOT,
+                    "no track point could be placed on a street of %s: %d of %d points lie farther than %.0f m from "
+                    + "every street; check that the tracks and the layer cover the same place (layer around %s)",
+                    request.layer().getFileName(), files.stream().mapToInt(TrackFileResult::offNetwork).sum(), points,
+                    request.matching().radius(), centre(network)));
+        }
+        for (TrackFileResult f : files) {
+            if (f.contents().points() == 0) {
+                warnings.add(f.file() + ": no track points");
+            } else if (f.matched() == 0) {
+                warnings.add(String.format(Locale.ROOT, "%s: none of its %d points could be placed on a street "
+                        + "(%d farther than %.0f m from every street)", f.file(), f.contents().points(), f.offNetwork(),
+                        request.matching().radius()));
+            }
+        }
+    }
+
+    private static String centre(StreetNetwork network) {
+        var frame = StreetIndex.frameAround(network);
+        return String.format(Locale.ROOT, "%.5f,%.5f", frame.lon0(), frame.lat0());
+    }
+}
