@@ -2,6 +2,7 @@ package org.streetcomb.coverage;
 
 import java.nio.file.Path;
 import java.util.List;
+import org.streetcomb.read.ReadOptions;
 
 /**
  * What to check.
@@ -12,9 +13,10 @@ import java.util.List;
  * @param matching       map-matching parameters
  * @param threshold      share of a street's need that counts as covered, in (0, 1]
  * @param bothKerbs      each two-way street must be driven once in each direction
+ * @param readOptions    how to read the layer
  */
 public record AuditRequest(Path layer, List<Path> tracks, double snapTolerance, MatchSettings matching,
-                           double threshold, boolean bothKerbs) {
+                           double threshold, boolean bothKerbs, ReadOptions readOptions) {
 
     public AuditRequest {
         tracks = List.copyOf(tracks);

@@ -15,8 +15,8 @@ import org.streetcomb.read.RoadLayer;
 
 /**
  * Runs a coverage check: reads the layer and builds its network, streams every GPX file segment by segment
- * through {@link TrackCleaner} and {@link HmmMapMatcher} into {@link DrivenIntervals}, and accounts the
- * result per street with {@link StreetCoverageAccounting}. Memory is bounded by the network and the longest
+ * into a {@link TrackCoverage}, checks that the tracks and the layer overlap, and accounts the result per
+ * street. Memory is bounded by the network and the longest
  * segment window, not by the size of the tracks.
  */
 public final class DriveAudit {
@@ -25,45 +25,28 @@ public final class DriveAudit {
     }
 
     public static Audit run(AuditRequest request, StageClock clock) {
-        RoadLayer layer = clock.time("read", () -> LayerReaders.read(request.layer()));
+        RoadLayer layer = clock.time("read", () -> LayerReaders.read(request.layer(), request.readOptions()));
         StreetNetwork network = clock.time("network",
                 () -> new NetworkBuilder(request.snapTolerance()).build(layer.features()));
         if (network.edgeCount() == 0) {
             throw InputError.at(request.layer(), null, "no street of positive length after noding");
         }
-        StreetIndex index = clock.time("index", () -> new StreetIndex(network));
-        MatchSettings settings = request.matching();
-        TrackCleaner cleaner = new TrackCleaner(settings.sigma(), settings.maxSpeed());
-        HmmMapMatcher matcher = new HmmMapMatcher(network, index, settings);
-        DrivenIntervals driven = new DrivenIntervals(network);
-        MatchTally tally = new MatchTally();
+        TrackCoverage coverage = clock.time("index", () -> new TrackCoverage(network, request.matching()));
+        MatchTally tally = coverage.tally();
         List<TrackFileResult> files = clock.time("match", () -> {
             List<TrackFileResult> results = new ArrayList<>();
             for (Path file : request.tracks()) {
                 int matchedBefore = tally.matched;
                 int offBefore = tally.offNetwork;
-                GpxContents contents = new GpxTrackReader().read(file, segment -> {
-                    tally.fixes += segment.size();
-                    TrackCleaner.Result cleaned = cleaner.clean(segment);
-                    tally.backwards += cleaned.backwards();
-                    tally.spikes += cleaned.spikes();
-                    tally.splits += cleaned.splits();
-                    tally.thinned += cleaned.thinned();
-                    for (int[] run : cleaned.runs()) {
-                        matcher.match(segment, run, driven, tally);
-                    }
-                });
+                GpxContents contents = new GpxTrackReader().read(file, coverage::accept);
                 results.add(new TrackFileResult(file, contents, tally.matched - matchedBefore, tally.offNetwork - offBefore));
             }
             return results;
         });
         List<String> warnings = new ArrayList<>();
         checkOverlap(request, files, network, warnings);
-        CoverageReport coverage = clock.time("account", () -> {
-            driven.merge();
-            return StreetCoverageAccounting.account(network, driven, request.threshold(), request.bothKerbs());
-        });
-        return new Audit(request, layer.report(), List.copyOf(files), tally, coverage, List.copyOf(warnings));
+        CoverageReport report = clock.time("account", () -> coverage.report(request.threshold(), request.bothKerbs()));
+        return new Audit(request, layer.report(), List.copyOf(files), tally, report, List.copyOf(warnings));
     }
 
     /** Refuses tracks that miss the network entirely, and warns about single files that do. */

@@ -17,10 +17,17 @@ import org.streetcomb.read.TrackSegment;
  * streets and both-kerb rounds need that; the matcher does not assume the driver obeyed one-way signs).
  * Emission: Gaussian in the distance from the fix to the street, log p = -(d / sigma)^2 / 2. Transition:
  * exponential in the difference between the straight-line distance of two fixes and the route distance
- * of the two states, log p = -|d_line - d_route| / beta; the route leaves the first state's edge in its
+ * of the two states, log p = -|d_line - d_route| / beta. For timed fixes after a gap (a dropout) the vehicle
+ * may have driven farther than the straight line, into a close and back, say: routes up to the distance
+ * its recent speed covers in the gap are not charged (an addition to the published model, which is the
+ * special case of no gap). The route leaves the first state's edge in its
  * direction, follows the shortest path, and enters the second state's edge in its direction, so turning
  * back in the middle of a street costs the way round. Staying on one edge in one direction is a direct
- * move (a small step backwards, within 2 sigma, is noise). The most probable sequence is found by the
+ * move charged for its signed step, so the backward steps of noise cost little and steady backward motion
+ * loses to the other direction. Turning back onto the same edge at a node where the street goes on costs
+ * {@value #U_TURN} m more (an addition to the published model: noise makes such turns look cheap, crews
+ * rarely make them, and without it a turning loop is read as a turn at its mouth). The most probable
+ * sequence is found by the
  * Viterbi algorithm. Routes are bounded by the gap limit and, for timed fixes, by the speed limit; where
  * no route is believable the match is split and nothing is credited across the split, as Newson &amp; Krumm
  * break the chain where the HMM cannot continue.
@@ -31,6 +38,11 @@ import org.streetcomb.read.TrackSegment;
  */
 public final class HmmMapMatcher {
 
+    /** Weight of the newest move in the smoothed speed. */
+    private static final double PACE_WEIGHT = 0.2;
+    /** Extra route metres charged for turning back at a node where the street goes on. */
+    static final double U_TURN = 50;
+
     private final StreetNetwork network;
     private final StreetIndex index;
     private final LocalFrame frame;
@@ -38,6 +50,8 @@ public final class HmmMapMatcher {
     private final DijkstraSearch search;
     private final int[] entryStamp;
     private int stamp;
+    /** Recent speed of the vehicle, metres per second (0 until known): a smoothed mean over matched moves. */
+    private double pace;
 
     public HmmMapMatcher(StreetNetwork network, StreetIndex index, MatchSettings settings) {
         this.network = network;
@@ -60,6 +74,8 @@ public final class HmmMapMatcher {
         final double[] emission;
         final double[] score;
         final int[] back;
+        /** Whether the best move into each state stayed on one edge (else it went through the nodes). */
+        final boolean[] direct;
 
         Layer(double x, double y, double time, StreetIndex.Hits hits, double sigma) {
             this.x = x;
@@ -72,6 +88,7 @@ public final class HmmMapMatcher {
             emission = new double[size];
             score = new double[size];
             back = new int[size];
+            direct = new boolean[size];
             for (int h = 0; h < hits.count(); h++) {
                 double z = hits.distance()[h] / sigma;
                 for (int d = 0; d < 2; d++) {
@@ -92,6 +109,7 @@ public final class HmmMapMatcher {
      */
     public void match(TrackSegment segment, int[] run, DrivenIntervals driven, MatchTally tally) {
         List<Layer> chain = new ArrayList<>();
+        pace = 0;
         for (int i : run) {
             double x = frame.x(segment.lon()[i]);
             double y = frame.y(segment.lat()[i]);
@@ -119,6 +137,8 @@ public final class HmmMapMatcher {
     private boolean advance(Layer previous, Layer next) {
         double line = Math.hypot(next.x - previous.x, next.y - previous.y);
         double limit = limit(previous, next);
+        double seconds = next.time - previous.time;
+        double reach = seconds > 0 && pace > 0 ? Math.min(limit, Math.max(line, pace * seconds)) : line;
         Arrays.fill(next.score, Double.NEGATIVE_INFINITY);
         Arrays.fill(next.back, -1);
         stamp++;
@@ -138,31 +158,74 @@ public final class HmmMapMatcher {
                 if (!done[k] && exit(previous, k) == exit && previous.score[k] != Double.NEGATIVE_INFINITY) {
                     done[k] = true;
                     for (int j = 0; j < next.size; j++) {
-                        double route = route(previous, k, next, j, toEntry[j]);
-                        if (route > limit) {
-                            continue;
-                        }
-                        double score = previous.score[k] - Math.abs(line - route) / settings.beta() + next.emission[j];
-                        if (score > next.score[j]) {
-                            next.score[j] = score;
-                            next.back[j] = k;
-                        }
+                        score(previous, k, next, j, line, reach, limit, toEntry[j]);
                     }
                 }
             }
         }
         for (int j = 0; j < next.size; j++) {
             if (next.back[j] >= 0) {
+                if (seconds > 0) {
+                    pace = pace == 0 ? line / seconds : (1 - PACE_WEIGHT) * pace + PACE_WEIGHT * line / seconds;
+                }
                 return true;
             }
         }
         return false;
     }
 
+    /**
+     * Scores the move from state k of a to state j of b, keeping it when it is the best so far. A move along
+     * one edge in one direction is charged |line - step| for its signed step, so noise that steps a few
+     * metres back costs a little, while steady backward motion costs twice its length and loses to the
+     * opposite direction. Any other move follows the route through the nodes.
+     */
+    private void score(Layer a, int k, Layer b, int j, double line, double reach, double limit, double nodeDistance) {
+        double via = network.length(a.edge[k]) - progress(a, k) + nodeDistance + progress(b, j);
+        double viaCost = via <= limit
+                ? deviation(via, line, reach) + (uTurn(a, k, b, j, nodeDistance) ? U_TURN : 0) : Double.POSITIVE_INFINITY;
+        double step = step(a, k, b, j);
+        double directCost = Math.abs(step) <= limit ? deviation(step, line, reach) : Double.POSITIVE_INFINITY;
+        double cost = Math.min(viaCost, directCost);
+        if (cost == Double.POSITIVE_INFINITY) {
+            return;
+        }
+        double score = a.score[k] - cost / settings.beta() + b.emission[j];
+        if (score > b.score[j]) {
+            b.score[j] = score;
+            b.back[j] = k;
+            b.direct[j] = directCost <= viaCost;
+        }
+    }
+
+    /** How far a route falls outside [line, reach]: Newson &amp; Krumm's |line - route| when reach = line. */
+    private static double deviation(double route, double line, double reach) {
+        return route < line ? line - route : route > reach ? route - reach : 0;
+    }
+
+    /** The signed metres moved along one edge in one direction, or NaN when the states are not so placed. */
+    private double step(Layer a, int k, Layer b, int j) {
+        if (a.edge[k] != b.edge[j] || a.along[k] != b.along[j]) {
+            return Double.NaN;
+        }
+        return progress(b, j) - progress(a, k);
+    }
+
+    /**
+     * Whether the move turns back onto the same edge at a node where the street goes on, which a crew does
+     * far less often than noise suggests (at a dead end it must, and that is not penalised).
+     */
+    private boolean uTurn(Layer a, int i, Layer b, int j, double nodeDistance) {
+        return a.edge[i] == b.edge[j] && a.along[i] != b.along[j] && nodeDistance == 0
+                && network.degree(exit(a, i)) > 1;
+    }
+
     /** The longest believable route between two fixes. */
     private double limit(Layer previous, Layer next) {
         double seconds = next.time - previous.time;
-        return seconds > 0 ? Math.min(settings.maxGap(), settings.maxSpeed() * seconds) : settings.maxGap();
+        return seconds > 0
+                ? Math.min(settings.maxGap(), settings.maxSpeed() * seconds + TrackCleaner.NOISE_SIGMAS * settings.sigma())
+                : settings.maxGap();
     }
 
     /** Distances from {@code exit} to the entry nodes of the next states, up to {@code limit}. */
@@ -184,21 +247,6 @@ public final class HmmMapMatcher {
                 }
             }
         }
-    }
-
-    /** Route distance from state i of a to state j of b, given the shortest distance between their nodes. */
-    private double route(Layer a, int i, Layer b, int j, double nodeDistance) {
-        double via = network.length(a.edge[i]) - progress(a, i) + nodeDistance + progress(b, j);
-        return Math.min(via, direct(a, i, b, j));
-    }
-
-    /** The distance of a move that stays on one edge in one direction, or infinity. */
-    private double direct(Layer a, int i, Layer b, int j) {
-        if (a.edge[i] != b.edge[j] || a.along[i] != b.along[j]) {
-            return Double.POSITIVE_INFINITY;
-        }
-        double step = progress(b, j) - progress(a, i);
-        return step >= -2 * settings.sigma() ? Math.abs(step) : Double.POSITIVE_INFINITY;
     }
 
     /** Metres from the edge's entry node to the state, in its direction of travel. */
@@ -238,12 +286,9 @@ public final class HmmMapMatcher {
         }
     }
 
-    /**
-     * Records the stretch from state i of a to state j of b. A direct move is never longer than the way
-     * round (except on a closed loop shorter than 4 sigma), so it is taken whenever it exists.
-     */
+    /** Records the stretch from state i of a to state j of b, by the move the Viterbi step chose. */
     private void credit(Layer a, int i, Layer b, int j, DrivenIntervals driven) {
-        if (direct(a, i, b, j) < Double.POSITIVE_INFINITY) {
+        if (b.direct[j]) {
             driven.add(a.edge[i], a.along[i], a.offset[i], b.offset[j]);
             return;
         }

@@ -16,7 +16,7 @@ public record MatchSettings(double sigma, double radius, double beta, double max
     public static final double DEFAULT_SIGMA = 10;
     public static final double DEFAULT_RADIUS = 50;
     public static final double DEFAULT_BETA = 5;
-    public static final double DEFAULT_MAX_GAP = 200;
+    public static final double DEFAULT_MAX_GAP = 300;
     /** 200 km/h: faster than any road vehicle on a service round, slower than a receiver's jump. */
     public static final double DEFAULT_MAX_SPEED = 200 / 3.6;
 

@@ -12,7 +12,8 @@ import org.streetcomb.read.TrackSegment;
  * <ul>
  *   <li>A fix whose time is not after the last kept fix's (a clock going backwards, a repeated fix) is
  *       dropped.</li>
- *   <li>A fix that implies a speed above the limit from the last kept fix is dropped when the fix after it
+ *   <li>A fix that implies a speed above the limit from the last kept fix (after allowing
+ *       {@value #NOISE_SIGMAS} sigma for noise) is dropped when the fix after it
  *       is within the limit again (a lone spike); otherwise the segment is split there (the receiver jumped,
  *       or time was lost), and nothing is credited across the split.</li>
  *   <li>A fix within twice the GPS noise of the last kept fix is dropped, as Newson &amp; Krumm (2009, section
@@ -27,8 +28,15 @@ public final class TrackCleaner {
     public record Result(List<int[]> runs, int backwards, int spikes, int splits, int thinned) {
     }
 
+    /**
+     * Two fixes may lie this many sigmas farther apart than the vehicle moved (three sigmas each way), so
+     * noise alone never reads as an impossible speed.
+     */
+    static final double NOISE_SIGMAS = 6;
+
     private final double thinWithin;
     private final double maxSpeed;
+    private final double noiseAllowance;
 
     /**
      * @param sigma     GPS noise (standard deviation) in metres
@@ -37,6 +45,7 @@ public final class TrackCleaner {
     public TrackCleaner(double sigma, double maxSpeed) {
         this.thinWithin = 2 * sigma;
         this.maxSpeed = maxSpeed;
+        this.noiseAllowance = NOISE_SIGMAS * sigma;
     }
 
     public Result clean(TrackSegment segment) {
@@ -85,7 +94,7 @@ public final class TrackCleaner {
             return false;
         }
         double seconds = segment.time()[b] - segment.time()[a];
-        return distance > maxSpeed * seconds;
+        return distance > maxSpeed * seconds + noiseAllowance;
     }
 
     /** The next fix after {@code i} whose time is after {@code since}, or -1. */

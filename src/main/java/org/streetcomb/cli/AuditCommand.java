@@ -1,0 +1,116 @@
+package org.streetcomb.cli;
+
+import java.io.PrintWriter;
+import java.nio.file.Path;
+import java.util.List;
+import java.util.concurrent.Callable;
+import org.streetcomb.ExitCode;
+import org.streetcomb.coverage.Audit;
+import org.streetcomb.coverage.AuditRequest;
+import org.streetcomb.coverage.CoverageGeoJsonWriter;
+import org.streetcomb.coverage.DriveAudit;
+import org.streetcomb.coverage.MatchSettings;
+import org.streetcomb.plan.StageClock;
+import picocli.CommandLine;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
+
+/** {@code streetcomb audit}: which streets the recorded GPS tracks of a drive covered, and which they missed. */
+@Command(name = "audit",
+        mixinStandardHelpOptions = true,
+        sortOptions = false,
+        description = {
+            "Matches recorded GPS tracks (GPX) to the streets of the layer and reports, per street, the share of its "
+                + "length that was driven (for one-way streets, in the permitted direction). Prints a summary; writes "
+                + "the streets with their status and the missed parts as GeoJSON.",
+            "",
+            "GPS tracks wander and maps age: check doubtful streets on the ground before reporting them."})
+public final class AuditCommand implements Callable<Integer> {
+
+    @Parameters(index = "0", paramLabel = "LAYER", description = "Road centrelines (the same layer the tour was planned on).")
+    Path layerFile;
+
+    @Parameters(index = "1..*", arity = "1..*", paramLabel = "TRACK", description = "GPX files of the drive (tracks, any number of segments and days).")
+    List<Path> tracks;
+
+    @Option(names = "--covered-at", paramLabel = "SHARE", defaultValue = "0.9",
+            description = "Share of a street's length that counts as covered, above 0 and at most 1 (default: ${DEFAULT-VALUE}).")
+    double coveredAt;
+
+    @Option(names = "--both-kerbs", description = "Each two-way street must be driven once in each direction.")
+    boolean bothKerbs;
+
+    @Option(names = "--streets-out", paramLabel = "FILE", description = "Write every street with its coverage status and share as GeoJSON.")
+    Path streetsOut;
+
+    @Option(names = "--missed-out", paramLabel = "FILE", description = "Write the missed parts of streets as GeoJSON lines.")
+    Path missedOut;
+
+    @Option(names = "--gps-sigma", paramLabel = "METRES", defaultValue = "10",
+            description = "GPS position noise, one standard deviation (default: ${DEFAULT-VALUE} m).")
+    double sigma;
+
+    @Option(names = "--search-radius", paramLabel = "METRES", defaultValue = "50",
+            description = "Streets farther than this from a fix are not considered for it (default: ${DEFAULT-VALUE} m).")
+    double radius;
+
+    @Option(names = "--route-scale", paramLabel = "METRES", defaultValue = "5",
+            description = "How far the route between fixes may differ from the straight line before it becomes "
+                    + "improbable (Newson-Krumm beta; default: ${DEFAULT-VALUE} m).")
+    double beta;
+
+    @Option(names = "--max-gap", paramLabel = "METRES", defaultValue = "300",
+            description = "The longest stretch credited between two consecutive fixes; a longer dropout is not "
+                    + "counted as driven (default: ${DEFAULT-VALUE} m).")
+    double maxGap;
+
+    @Option(names = "--max-speed", paramLabel = "KM/H", defaultValue = "200",
+            description = "Fixes implying a faster speed are dropped or split the track (default: ${DEFAULT-VALUE} km/h).")
+    double maxSpeed;
+
+    @Option(names = "--json", description = "Print the summary as JSON instead of text.")
+    boolean json;
+
+    @Option(names = {"-q", "--quiet"}, description = "No progress messages on stderr.")
+    boolean quiet;
+
+    @CommandLine.Mixin
+    LayerOptions layer;
+
+    @CommandLine.Spec
+    CommandLine.Model.CommandSpec spec;
+
+    @Override
+    public Integer call() {
+        if (!(coveredAt > 0 && coveredAt <= 1)) {
+            throw new CommandLine.ParameterException(spec.commandLine(), "--covered-at must be above 0 and at most 1");
+        }
+        positive(sigma, "--gps-sigma");
+        positive(radius, "--search-radius");
+        positive(beta, "--route-scale");
+        positive(maxGap, "--max-gap");
+        positive(maxSpeed, "--max-speed");
+        MatchSettings settings = new MatchSettings(sigma, radius, beta, maxGap, maxSpeed / 3.6);
+        StageClock clock = new StageClock(TerminalProgress.forCommandLine(quiet, System.err));
+        Audit audit = DriveAudit.run(new AuditRequest(layerFile, tracks, layer.snap(), settings, coveredAt, bothKerbs,
+                layer.readOptions()), clock);
+        if (streetsOut != null) {
+            clock.run("write", () -> CoverageGeoJsonWriter.writeStreets(streetsOut, audit.coverage()));
+        }
+        if (missedOut != null) {
+            clock.run("write", () -> CoverageGeoJsonWriter.writeMissed(missedOut, audit.coverage()));
+        }
+        AuditSummary summary = AuditSummary.of(audit, clock.stages(), streetsOut, missedOut);
+        PrintWriter stdout = spec.commandLine().getOut();
+        stdout.print(json ? summary.toJson() : summary.toText());
+        stdout.flush();
+        return ExitCode.OK;
+    }
+
+    private void positive(double value, String option) {
+        if (!(value > 0) || !Double.isFinite(value)) {
+            throw new CommandLine.ParameterException(spec.commandLine(), option + " must be a positive number");
+        }
+    }
+}

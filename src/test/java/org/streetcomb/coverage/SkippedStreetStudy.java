@@ -1,0 +1,119 @@
+package org.streetcomb.coverage;
+
+import java.util.ArrayList;
+import java.util.Collections;
+import java.util.IdentityHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.Random;
+import java.util.Set;
+import org.streetcomb.network.Components;
+import org.streetcomb.network.NearestNode;
+import org.streetcomb.network.NetworkBuilder;
+import org.streetcomb.network.StreetNetwork;
+import org.streetcomb.read.RoadFeature;
+import org.streetcomb.read.TrackSegment;
+import org.streetcomb.solve.UndirectedPostman;
+import org.streetcomb.tour.Tour;
+import org.streetcomb.tour.TourPlanner;
+
+/**
+ * One run of the skipped-street study (simulated data): a crew skips a seeded random set of streets (any
+ * street whose loss leaves the network in one piece), so the tour it drives is the postman tour of the
+ * network without them; its recording is simulated with noise and
+ * dropouts and audited against the full network. Counts, per street, how the audit's "not covered" agrees
+ * with the streets really skipped.
+ */
+final class SkippedStreetStudy {
+
+    /** Agreement of "not covered" with "skipped", per street. */
+    record Counts(int truePositive, int falsePositive, int falseNegative, int streets, int fixes) {
+
+        Counts plus(Counts o) {
+            return new Counts(truePositive + o.truePositive, falsePositive + o.falsePositive,
+                    falseNegative + o.falseNegative, streets + o.streets, fixes + o.fixes);
+        }
+
+        double precision() {
+            return truePositive + falsePositive == 0 ? 1 : truePositive / (double) (truePositive + falsePositive);
+        }
+
+        double recall() {
+            return truePositive + falseNegative == 0 ? 1 : truePositive / (double) (truePositive + falseNegative);
+        }
+    }
+
+    static final Counts NONE = new Counts(0, 0, 0, 0, 0);
+
+    private SkippedStreetStudy() {
+    }
+
+    /**
+     * @param lines        the street lines (all required)
+     * @param skipShare    share of the streets the crew skips
+     * @param drive        how the recording is simulated
+     * @param matching     the audit's matching settings
+     */
+    static Counts run(List<RoadFeature> lines, double skipShare, SimulatedDrive.Settings drive, MatchSettings matching,
+                      long seed) {
+        Random random = new Random(seed);
+        StreetNetwork full = new NetworkBuilder(0.5).build(lines);
+        List<RoadFeature> candidates = new ArrayList<>(lines);
+        Collections.shuffle(candidates, random);
+        int k = Math.max(3, (int) Math.round(skipShare * lines.size()));
+        Set<RoadFeature> skipped = Collections.newSetFromMap(new IdentityHashMap<>());
+        int parts = Components.of(full).count();
+        StreetNetwork reduced = full;
+        // the crew drives round what it skips: a skip that would cut the network apart is not drawn
+        for (int c = 0; c < candidates.size() && skipped.size() < k; c++) {
+            skipped.add(candidates.get(c));
+            StreetNetwork trial = new NetworkBuilder(0.5).build(lines.stream().filter(f -> !skipped.contains(f)).toList());
+            if (Components.of(trial).count() > parts) {
+                skipped.remove(candidates.get(c));
+            } else {
+                reduced = trial;
+            }
+        }
+        var depot = NearestNode.of(reduced, lines.get(0).line().getCoordinateN(0).x, lines.get(0).line().getCoordinateN(0).y);
+        List<Tour> tours = TourPlanner.tours(reduced, Components.of(reduced), UndirectedPostman.solve(reduced),
+                depot.node(), false);
+        List<TrackSegment> segments = SimulatedDrive.drive(reduced, tours, drive, seed, SimulatedDrive.START);
+        TrackCoverage coverage = new TrackCoverage(full, matching);
+        segments.forEach(coverage::accept);
+        CoverageReport report = coverage.report(0.9, false);
+        Map<RoadFeature, StreetCoverage> byFeature = new IdentityHashMap<>();
+        report.streets().forEach(s -> byFeature.put(s.feature(), s));
+        int tp = 0, fp = 0, fn = 0, streets = 0;
+        for (RoadFeature f : lines) {
+            StreetCoverage s = byFeature.get(f);
+            if (s == null) {
+                continue;
+            }
+            streets++;
+            boolean flagged = s.status() != CoverageStatus.COVERED;
+            boolean truth = skipped.contains(f);
+            tp += flagged && truth ? 1 : 0;
+            fp += flagged && !truth ? 1 : 0;
+            if (flagged != truth && System.getProperty("study.debug") != null) {
+                System.out.printf("%s %s %.3f len %.0f seed %d%n", truth ? "FN" : "FP", f.id(), s.fraction(), s.length(), seed);
+                var c0 = f.line().getCoordinateN(f.line().getNumPoints() - 1);
+                for (TrackSegment g : segments) {
+                    for (int i = 0; i < g.size(); i++) {
+                        double d = org.streetcomb.network.GeodesicLength.between(g.lon()[i], g.lat()[i], c0.x, c0.y);
+                        if (d < 120) {
+                            System.out.printf("   fix %d t=%.0f d_end=%.0f%n", i, g.time()[i], d);
+                        }
+                    }
+                }
+                report.missed().stream().filter(m -> full.feature(m.edge()) == f).forEach(m -> System.out.println("   " + m));
+            }
+            fn += !flagged && truth ? 1 : 0;
+        }
+        if (System.getProperty("study.debug") != null) {
+            MatchTally t = coverage.tally();
+            System.out.printf("   tally splits %d spikes %d breaks %d chains %d off %d%n", t.splits(), t.spikes(), t.breaks(), t.chains(), t.offNetwork());
+        }
+        int fixes = segments.stream().mapToInt(TrackSegment::size).sum();
+        return new Counts(tp, fp, fn, streets, fixes);
+    }
+}
