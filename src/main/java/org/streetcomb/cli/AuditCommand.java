@@ -96,10 +96,10 @@ public final class AuditCommand implements Callable<Integer> {
         Audit audit = DriveAudit.run(new AuditRequest(layerFile, tracks, layer.snap(), settings, coveredAt, bothKerbs,
                 layer.readOptions()), clock);
         if (streetsOut != null) {
-            clock.run("write", () -> CoverageGeoJsonWriter.writeStreets(streetsOut, audit.coverage()));
+            clock.run("write streets", () -> CoverageGeoJsonWriter.writeStreets(streetsOut, audit.coverage()));
         }
         if (missedOut != null) {
-            clock.run("write", () -> CoverageGeoJsonWriter.writeMissed(missedOut, audit.coverage()));
+            clock.run("write missed", () -> CoverageGeoJsonWriter.writeMissed(missedOut, audit.coverage()));
         }
         AuditSummary summary = AuditSummary.of(audit, clock.stages(), streetsOut, missedOut);
         PrintWriter stdout = spec.commandLine().getOut();

@@ -12,6 +12,7 @@ import org.streetcomb.read.GpxContents;
 import org.streetcomb.read.GpxTrackReader;
 import org.streetcomb.read.LayerReaders;
 import org.streetcomb.read.RoadLayer;
+import org.streetcomb.read.TrackSegment;
 
 /**
  * Runs a coverage check: reads the layer and builds its network, streams every GPX file segment by segment
@@ -33,25 +34,29 @@ public final class DriveAudit {
         }
         TrackCoverage coverage = clock.time("index", () -> new TrackCoverage(network, request.matching()));
         MatchTally tally = coverage.tally();
+        TrackExtent extent = new TrackExtent();
         List<TrackFileResult> files = clock.time("match", () -> {
             List<TrackFileResult> results = new ArrayList<>();
             for (Path file : request.tracks()) {
                 int matchedBefore = tally.matched;
                 int offBefore = tally.offNetwork;
-                GpxContents contents = new GpxTrackReader().read(file, coverage::accept);
+                GpxContents contents = new GpxTrackReader().read(file, segment -> {
+                    extent.add(segment);
+                    coverage.accept(segment);
+                });
                 results.add(new TrackFileResult(file, contents, tally.matched - matchedBefore, tally.offNetwork - offBefore));
             }
             return results;
         });
         List<String> warnings = new ArrayList<>();
-        checkOverlap(request, files, network, warnings);
+        checkOverlap(request, files, network, extent, warnings);
         CoverageReport report = clock.time("account", () -> coverage.report(request.threshold(), request.bothKerbs()));
         return new Audit(request, layer.report(), List.copyOf(files), tally, report, List.copyOf(warnings));
     }
 
     /** Refuses tracks that miss the network entirely, and warns about single files that do. */
     private static void checkOverlap(AuditRequest request, List<TrackFileResult> files, StreetNetwork network,
-                                     List<String> warnings) {
+                                     TrackExtent extent, List<String> warnings) {
         int points = files.stream().mapToInt(f -> f.contents().points()).sum();
         if (points == 0) {
             throw new InputError(files.size() == 1
@@ -60,11 +65,12 @@ public final class DriveAudit {
         }
         int matched = files.stream().mapToInt(TrackFileResult::matched).sum();
         if (matched == 0) {
+            var layer = StreetIndex.frameAround(network);
             throw new InputError(String.format(Locale.ROOT,
-                    "no track point could be placed on a street of %s: %d of %d points lie farther than %.0f m from "
-                    + "every street; check that the tracks and the layer cover the same place (layer around %s)",
-                    request.layer().getFileName(), files.stream().mapToInt(TrackFileResult::offNetwork).sum(), points,
-                    request.matching().radius(), centre(network)));
+                    "no track point could be placed on a street of %s: none of the %d points lies within %.0f m of a "
+                    + "street; the tracks are around %.5f,%.5f and the layer around %.5f,%.5f: check that they cover "
+                    + "the same place", request.layer().getFileName(), points, request.matching().radius(),
+                    extent.centreLon(), extent.centreLat(), layer.lon0(), layer.lat0()));
         }
         for (TrackFileResult f : files) {
             if (f.contents().points() == 0) {
@@ -77,8 +83,28 @@ public final class DriveAudit {
         }
     }
 
-    private static String centre(StreetNetwork network) {
-        var frame = StreetIndex.frameAround(network);
-        return String.format(Locale.ROOT, "%.5f,%.5f", frame.lon0(), frame.lat0());
+    /** The box around every fix read, for messages. */
+    private static final class TrackExtent {
+        private double minLon = Double.POSITIVE_INFINITY;
+        private double maxLon = Double.NEGATIVE_INFINITY;
+        private double minLat = Double.POSITIVE_INFINITY;
+        private double maxLat = Double.NEGATIVE_INFINITY;
+
+        void add(TrackSegment segment) {
+            for (int i = 0; i < segment.size(); i++) {
+                minLon = Math.min(minLon, segment.lon()[i]);
+                maxLon = Math.max(maxLon, segment.lon()[i]);
+                minLat = Math.min(minLat, segment.lat()[i]);
+                maxLat = Math.max(maxLat, segment.lat()[i]);
+            }
+        }
+
+        double centreLon() {
+            return (minLon + maxLon) / 2;
+        }
+
+        double centreLat() {
+            return (minLat + maxLat) / 2;
+        }
     }
 }

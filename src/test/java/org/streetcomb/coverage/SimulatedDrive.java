@@ -21,7 +21,7 @@ import org.streetcomb.tour.Tour;
  * recording): a speed drawn per step, fixes at intervals drawn per fix, independent Gaussian noise east and
  * north, and dropouts during which no fix is written. Seeded, so every run gives the same fixes.
  */
-final class SimulatedDrive {
+public final class SimulatedDrive {
 
     /**
      * @param minKmh          slowest speed on a step, km/h
@@ -33,19 +33,19 @@ final class SimulatedDrive {
      * @param minDropout      shortest dropout, seconds
      * @param maxDropout      longest dropout, seconds
      */
-    record Settings(double minKmh, double maxKmh, double minInterval, double maxInterval, double sigma,
+    public record Settings(double minKmh, double maxKmh, double minInterval, double maxInterval, double sigma,
                     double dropoutEvery, double minDropout, double maxDropout) {
     }
 
     /** 2026-03-02T07:00:00Z, an invented start of shift. */
-    static final double START = 1_772_434_800;
+    public static final double START = 1_772_434_800;
     private static final double METRES_PER_DEGREE = Math.PI / 180 * 6_371_008.8;
 
     private SimulatedDrive() {
     }
 
     /** One segment per tour, driven one after another from {@code start} seconds. */
-    static List<TrackSegment> drive(StreetNetwork network, List<Tour> tours, Settings s, long seed, double start) {
+    public static List<TrackSegment> drive(StreetNetwork network, List<Tour> tours, Settings s, long seed, double start) {
         Random random = new Random(seed);
         List<TrackSegment> segments = new ArrayList<>();
         double clock = start;
@@ -118,7 +118,7 @@ final class SimulatedDrive {
     }
 
     /** Writes segments as one GPX 1.1 track; {@code timed} false leaves out the times. */
-    static void writeGpx(Path file, List<TrackSegment> segments, boolean timed) throws IOException {
+    public static void writeGpx(Path file, List<TrackSegment> segments, boolean timed) throws IOException {
         try (Writer w = Files.newBufferedWriter(file, StandardCharsets.UTF_8)) {
             w.write("<?xml version=\"1.0\" encoding=\"UTF-8\"?>\n<gpx version=\"1.1\" creator=\"streetcomb tests "
                     + "(simulated drive, invented data)\" xmlns=\"http://www.topografix.com/GPX/1/1\">\n<trk><name>simulated"

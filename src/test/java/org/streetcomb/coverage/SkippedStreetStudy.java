@@ -94,24 +94,7 @@ final class SkippedStreetStudy {
             boolean truth = skipped.contains(f);
             tp += flagged && truth ? 1 : 0;
             fp += flagged && !truth ? 1 : 0;
-            if (flagged != truth && System.getProperty("study.debug") != null) {
-                System.out.printf("%s %s %.3f len %.0f seed %d%n", truth ? "FN" : "FP", f.id(), s.fraction(), s.length(), seed);
-                var c0 = f.line().getCoordinateN(f.line().getNumPoints() - 1);
-                for (TrackSegment g : segments) {
-                    for (int i = 0; i < g.size(); i++) {
-                        double d = org.streetcomb.network.GeodesicLength.between(g.lon()[i], g.lat()[i], c0.x, c0.y);
-                        if (d < 120) {
-                            System.out.printf("   fix %d t=%.0f d_end=%.0f%n", i, g.time()[i], d);
-                        }
-                    }
-                }
-                report.missed().stream().filter(m -> full.feature(m.edge()) == f).forEach(m -> System.out.println("   " + m));
-            }
             fn += !flagged && truth ? 1 : 0;
-        }
-        if (System.getProperty("study.debug") != null) {
-            MatchTally t = coverage.tally();
-            System.out.printf("   tally splits %d spikes %d breaks %d chains %d off %d%n", t.splits(), t.spikes(), t.breaks(), t.chains(), t.offNetwork());
         }
         int fixes = segments.stream().mapToInt(TrackSegment::size).sum();
         return new Counts(tp, fp, fn, streets, fixes);
