@@ -3,6 +3,7 @@ package org.streetcomb.solve;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import java.util.Arrays;
 import java.util.List;
 import java.util.Map;
 import java.util.Random;
@@ -39,28 +40,42 @@ class DualPricingTest {
         int[] odd = UndirectedPostman.oddNodes(network);
         double[][] d = UndirectedPostmanOptimalityTest.floydWarshall(network);
         Random random = new Random(seed);
-        for (int trial = 0; trial < 20; trial++) {
-            double[] potential = new double[odd.length];
+        for (int trial = 0; trial < 30; trial++) {
+            double[] node = new double[odd.length];
             for (int i = 0; i < odd.length; i++) {
-                potential[i] = random.nextDouble() * 120 - 10;
+                node[i] = random.nextDouble() * 120 - 10;
             }
-            // one blossom over the first three odd nodes, to exercise the level-by-level pricing
-            double z = random.nextDouble() * 30;
-            List<Map.Entry<int[], Double>> blossoms = odd.length >= 3 && trial % 2 == 1
-                    ? List.of(Map.entry(new int[] {0, 1, 2}, z)) : List.of();
-            double[] y = potential.clone();
-            if (!blossoms.isEmpty()) {
-                for (int i = 0; i < 3; i++) {
-                    y[i] += z;
+            // none, one, or two nested blossoms (with a sibling), to exercise every pricing level
+            List<Map.Entry<int[], Double>> blossoms = new java.util.ArrayList<>();
+            if (trial % 3 >= 1 && odd.length >= 9) {
+                blossoms.add(Map.entry(new int[] {0, 1, 2}, random.nextDouble() * 30));
+            }
+            if (trial % 3 == 2 && odd.length >= 9) {
+                blossoms.add(Map.entry(new int[] {0, 1, 2, 3, 4}, random.nextDouble() * 30));
+                blossoms.add(Map.entry(new int[] {6, 7, 8}, random.nextDouble() * 30));
+            }
+            double[] y = node.clone();
+            for (var blossom : blossoms) {
+                for (int i : blossom.getKey()) {
+                    y[i] += blossom.getValue();
                 }
             }
             Set<Long> expected = new TreeSet<>();
+            Set<Long> nearZero = new TreeSet<>();
             for (int i = 0; i < odd.length; i++) {
                 for (int j = i + 1; j < odd.length; j++) {
-                    boolean sameBlossom = !blossoms.isEmpty() && i < 3 && j < 3;
-                    double reduced = d[odd[i]][odd[j]] - (sameBlossom ? potential[i] + potential[j] : y[i] + y[j]);
+                    double reduced = d[odd[i]][odd[j]] - y[i] - y[j];
+                    for (var blossom : blossoms) {
+                        var set = Arrays.stream(blossom.getKey()).boxed().toList();
+                        if (set.contains(i) && set.contains(j)) {
+                            reduced += 2 * blossom.getValue();
+                        }
+                    }
+                    long key = (long) i * odd.length + j;
                     if (reduced < -1e-3) {
-                        expected.add((long) i * odd.length + j);
+                        expected.add(key);
+                    } else if (reduced < 1e-3) {
+                        nearZero.add(key);
                     }
                 }
             }
@@ -68,19 +83,31 @@ class DualPricingTest {
 
             assertEquals(expected.isEmpty(), found.length == 0, "a violation is found iff one exists");
             for (long key : found) {
-                assertTrue(expected.contains(key) || nearZero(key, odd, d, potential, y, blossoms),
-                        "reported pair " + key + " is violated");
+                assertTrue(expected.contains(key) || nearZero.contains(key), "reported pair " + key + " is violated");
+            }
+            // each level (the top, each blossom) is priced on its own: one with a violated pair reports one
+            for (int level = -1; level < blossoms.size(); level++) {
+                final int l = level;
+                boolean violatedHere = expected.stream().anyMatch(k -> level(k, odd.length, blossoms) == l);
+                boolean foundHere = Arrays.stream(found).anyMatch(k -> level(k, odd.length, blossoms) == l);
+                assertTrue(!violatedHere || foundHere, "level " + level + " has a violated pair that was not found");
             }
         }
     }
 
-    /** A pair within the pricing tolerance of zero, which either answer may report. */
-    private static boolean nearZero(long key, int[] odd, double[][] d, double[] potential, double[] y,
-                                    List<Map.Entry<int[], Double>> blossoms) {
-        int i = (int) (key / odd.length);
-        int j = (int) (key % odd.length);
-        boolean sameBlossom = !blossoms.isEmpty() && i < 3 && j < 3;
-        double reduced = d[odd[i]][odd[j]] - (sameBlossom ? potential[i] + potential[j] : y[i] + y[j]);
-        return reduced < 1e-3;
+    /** The innermost of the given blossoms that holds both ends of the pair, or -1 for none. */
+    private static int level(long key, int count, List<Map.Entry<int[], Double>> blossoms) {
+        int i = (int) (key / count);
+        int j = (int) (key % count);
+        int level = -1;
+        int size = Integer.MAX_VALUE;
+        for (int b = 0; b < blossoms.size(); b++) {
+            var set = Arrays.stream(blossoms.get(b).getKey()).boxed().toList();
+            if (set.contains(i) && set.contains(j) && set.size() < size) {
+                level = b;
+                size = set.size();
+            }
+        }
+        return level;
     }
 }
