@@ -2,6 +2,7 @@ package org.streetcomb.cli;
 
 import java.io.PrintWriter;
 import java.nio.file.Path;
+import java.util.ArrayList;
 import java.util.List;
 import java.util.concurrent.Callable;
 import org.streetcomb.ExitCode;
@@ -15,6 +16,9 @@ import org.streetcomb.network.StreetNetwork;
 import org.streetcomb.plan.StageClock;
 import org.streetcomb.read.LayerReaders;
 import org.streetcomb.read.RoadLayer;
+import org.streetcomb.report.FindingLayers;
+import org.streetcomb.report.MapLayer;
+import org.streetcomb.report.NetworkLayer;
 import org.streetcomb.write.FindingGeoJsonWriter;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
@@ -62,6 +66,9 @@ public final class HealthCommand implements Callable<Integer> {
     @Option(names = {"-q", "--quiet"}, description = "No progress messages on stderr.")
     boolean quiet;
 
+    @CommandLine.Mixin
+    ReportOptions map;
+
     @CommandLine.Spec
     CommandLine.Model.CommandSpec spec;
 
@@ -74,6 +81,7 @@ public final class HealthCommand implements Callable<Integer> {
                         "--near-miss, --stub and --duplicate-within must be between 0 and 1000 metres");
             }
         }
+        map.validate();
         CheckOptions options = new CheckOptions(snap, nearMiss, stub, duplicate);
         StageClock clock = new StageClock(TerminalProgress.forCommandLine(quiet, System.err));
         RoadLayer roads = clock.time("read", () -> LayerReaders.read(input, layer.readOptions()));
@@ -86,6 +94,9 @@ public final class HealthCommand implements Callable<Integer> {
             clock.run("write", () -> new FindingGeoJsonWriter().write(out, findings));
         }
         HealthSummary summary = HealthSummary.of(report, clock.stages(), out);
+        List<MapLayer> layers = new ArrayList<>(List.of(NetworkLayer.of(network)));
+        layers.addAll(FindingLayers.of(findings));
+        map.write("Health check: " + input.getFileName(), layers, FindingLayers.groups(findings), summary.json(), clock);
         PrintWriter stdout = spec.commandLine().getOut();
         stdout.print(json ? summary.toJson() : summary.toText());
         stdout.flush();

@@ -143,6 +143,11 @@ final class HealthSummary {
         return text.toString();
     }
 
+    /** The summary tree that {@link #toJson()} prints, for the report's tables. */
+    ObjectNode json() {
+        return json;
+    }
+
     String toJson() {
         try {
             return MAPPER.writeValueAsString(json) + System.lineSeparator();

@@ -92,7 +92,7 @@ public final class HtmlReportWriter {
             }
             w.write("</ul>\n</details>\n");
         }
-        w.write("<p class=\"hint\">Point at a line for its step and street; click for details.</p></section>\n");
+        w.write("<p class=\"hint\">Point at a line or a dot to see what it is; click it for details.</p></section>\n");
         w.write("<section id=\"summary\"><h2>Summary</h2>\n" + SummaryTables.html(report.summary()) + "\n</section>\n");
         w.write("<section id=\"run\"><h2>How it was made</h2>\n<table class=\"facts\">\n");
         for (MapReport.Entry entry : report.run()) {

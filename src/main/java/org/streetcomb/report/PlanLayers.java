@@ -5,10 +5,6 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
-import org.locationtech.jts.geom.Coordinate;
-import org.locationtech.jts.geom.GeometryFactory;
-import org.locationtech.jts.geom.LineString;
-import org.locationtech.jts.operation.linemerge.LineMerger;
 import org.streetcomb.network.StreetNetwork;
 import org.streetcomb.plan.Plan;
 import org.streetcomb.read.RoadFeature;
@@ -17,15 +13,15 @@ import org.streetcomb.tour.Tour;
 /**
  * The map layers of a plan: the street network, the service and deadhead passes of each tour, the
  * direction of travel, step numbers and the depot. Consecutive steps of a tour on the same street with
- * the same kind of pass are drawn as one run, and the network is drawn one street name at a time, so a
- * street split at every junction is still one line to point at, and a large plan stays quick to draw.
+ * the same kind of pass are drawn as one run (the network is drawn one street at a time by
+ * {@link NetworkLayer}), so a street split at every junction is still one line to point at, and a large plan
+ * stays quick to draw.
  */
 public final class PlanLayers {
 
     /** Tour colours, chosen to stay apart from each other, from the deadhead amber and the depot red. */
     static final String[] TOUR_COLOURS = {"#2b59c3", "#2a9d8f", "#8f3fb5", "#1d7a3a", "#c2185b",
         "#0b6e8a", "#5c6f1d", "#3d3b8e", "#6b4e16", "#a23b72"};
-    static final String NETWORK_COLOUR = "#9aa39c";
     static final String DEADHEAD_COLOUR = "#f0a202";
     static final String ARROW_COLOUR = "#263238";
     static final String DEPOT_COLOUR = "#d7263d";
@@ -37,9 +33,6 @@ public final class PlanLayers {
     /** Steps shorter than this get no arrow: it would not be readable. */
     private static final double MIN_ARROW_STEP = 6;
     private static final double METRES_PER_DEGREE = Math.PI / 180 * 6_371_008.8;
-    /** Feature ids listed in a street's details; the rest are counted. */
-    private static final int IDS_LISTED = 8;
-    private static final GeometryFactory FACTORY = new GeometryFactory();
 
     private final Plan plan;
     private final StreetNetwork network;
@@ -103,8 +96,7 @@ public final class PlanLayers {
             }
         }
         List<MapLayer> layers = new ArrayList<>();
-        layers.add(new MapLayer("streets", "Streets", "every street of the network, as noded",
-                MapLayer.Kind.LINES, MapStyle.solid(NETWORK_COLOUR, 2, 1), true, streets()));
+        layers.add(NetworkLayer.of(network));
         layers.add(new MapLayer("service", "Service passes", "streets driven to service them, in the colour of their " + noun.toLowerCase(Locale.ROOT),
                 MapLayer.Kind.LINES, MapStyle.solid(TOUR_COLOURS[0], 4, 0.85), true, service));
         layers.add(new MapLayer("deadhead", "Deadhead passes", "streets driven again without servicing",
@@ -125,23 +117,6 @@ public final class PlanLayers {
         layers.add(new MapLayer("depot", "Depot", "", MapLayer.Kind.POINTS, MapStyle.solid(DEPOT_COLOUR, 16, 1), true,
                 starts(true)));
         return layers;
-    }
-
-    /**
-     * One feature per street name (per feature id for unnamed streets), its edges sewn into as few lines as
-     * possible with JTS's LineMerger, so a street split at every junction is one thing to point at.
-     */
-    private List<MapFeature> streets() {
-        Map<String, Street> byKey = new LinkedHashMap<>();
-        for (int e = 0; e < network.edgeCount(); e++) {
-            RoadFeature source = network.feature(e);
-            byKey.computeIfAbsent(streetKey(source), k -> new Street(streetName(source))).add(e, source);
-        }
-        List<MapFeature> features = new ArrayList<>();
-        for (Street street : byKey.values()) {
-            features.add(street.feature());
-        }
-        return features;
     }
 
     /** The depot, or the start of every tour but the depot's, each a point with its node and position. */
@@ -179,23 +154,15 @@ public final class PlanLayers {
     }
 
     private static String streetKey(RoadFeature feature) {
-        return feature.name().isEmpty() ? "\u0000" + feature.id() : feature.name();
+        return NetworkLayer.streetKey(feature);
     }
 
     private static String streetName(RoadFeature feature) {
-        return feature.name().isEmpty() ? "unnamed street (feature " + feature.id() + ")" : feature.name();
+        return NetworkLayer.streetName(feature);
     }
 
-    /** The edge's polyline in the direction of travel, as lon, lat pairs. */
     private double[] edgePoints(int e, boolean forward) {
-        int n = network.pointCount(e);
-        double[] points = new double[2 * n];
-        for (int k = 0; k < n; k++) {
-            int i = forward ? k : n - 1 - k;
-            points[2 * k] = network.pointLon(e, i);
-            points[2 * k + 1] = network.pointLat(e, i);
-        }
-        return points;
+        return NetworkLayer.edgePoints(network, e, forward);
     }
 
     /** A chevron at the middle of each step of the run long enough to carry one, pointing the way it is driven. */
@@ -248,54 +215,6 @@ public final class PlanLayers {
 
     private static String metres(double value) {
         return String.format(Locale.ROOT, "%.1f", value);
-    }
-
-    /** The edges of one street, gathered for the network layer. */
-    private final class Street {
-        final String name;
-        final List<LineString> edges = new ArrayList<>();
-        final List<String> ids = new ArrayList<>();
-        RoadFeature lastSource;
-        double length;
-
-        Street(String name) {
-            this.name = name;
-        }
-
-        void add(int e, RoadFeature source) {
-            double[] points = edgePoints(e, true);
-            Coordinate[] coordinates = new Coordinate[points.length / 2];
-            for (int k = 0; k < coordinates.length; k++) {
-                coordinates[k] = new Coordinate(points[2 * k], points[2 * k + 1]);
-            }
-            edges.add(FACTORY.createLineString(coordinates));
-            if (source != lastSource && (ids.isEmpty() || !ids.get(ids.size() - 1).equals(source.id()))) {
-                ids.add(source.id());
-            }
-            lastSource = source;
-            length += network.length(e);
-        }
-
-        MapFeature feature() {
-            LineMerger merger = new LineMerger();
-            merger.add(edges);
-            List<double[]> parts = new ArrayList<>();
-            for (Object merged : merger.getMergedLineStrings()) {
-                Coordinate[] coordinates = ((LineString) merged).getCoordinates();
-                double[] part = new double[2 * coordinates.length];
-                for (int k = 0; k < coordinates.length; k++) {
-                    part[2 * k] = coordinates[k].x;
-                    part[2 * k + 1] = coordinates[k].y;
-                }
-                parts.add(part);
-            }
-            Map<String, String> details = new LinkedHashMap<>();
-            details.put("Feature ids", ids.size() <= IDS_LISTED ? String.join(", ", ids)
-                    : String.join(", ", ids.subList(0, IDS_LISTED)) + " and " + (ids.size() - IDS_LISTED) + " more");
-            details.put("Length (m)", metres(length));
-            details.put("Edges", String.valueOf(edges.size()));
-            return new MapFeature(parts.toArray(new double[0][]), null, null, name, details);
-        }
     }
 
     /** Consecutive steps of one tour on one street with one kind of pass. */

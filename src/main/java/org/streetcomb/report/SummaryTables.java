@@ -107,7 +107,7 @@ final class SummaryTables {
             html.append("<tr>");
             for (String column : columns) {
                 JsonNode value = array.get(i).get(column);
-                cell(path + "." + i + "." + column, value == null ? null : value);
+                cell(path + "." + i + "." + column, value);
             }
             html.append("</tr>");
         }
@@ -134,11 +134,16 @@ final class SummaryTables {
     }
 
     private void cell(String path, JsonNode value) {
+        if (value == null) {
+            // this element of the array has no such field
+            html.append("<td></td>");
+            return;
+        }
         html.append("<td data-key=\"").append(HtmlText.escape(path)).append('"');
         if (value != null && value.isNumber()) {
             html.append(" class=\"number\"");
         }
-        html.append('>').append(value == null ? "" : HtmlText.escape(text(value))).append("</td>");
+        html.append('>').append(HtmlText.escape(text(value))).append("</td>");
     }
 
     /** The value as JSON writes it; text without quotes; a nested value as compact JSON. */

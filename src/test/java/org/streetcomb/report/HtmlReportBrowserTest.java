@@ -66,19 +66,7 @@ class HtmlReportBrowserTest {
         assertTrue(counts.get("onMap").asInt() >= 5, "the layers shown at start are on the map: " + counts);
         assertTrue(counts.get("canvases").asInt() >= 5, "each line layer draws on its own canvas: " + counts);
 
-        // every number and text of the summary table is the one the command printed with --json
-        JsonNode cells = chromium.eval("Array.from(document.querySelectorAll('#summary [data-key]'))"
-                + ".map(c => [c.dataset.key, c.textContent])");
-        assertTrue(cells.size() > 20, "the summary table has the summary's fields: " + cells.size());
-        for (JsonNode cell : cells) {
-            JsonNode expected = at(printed, cell.get(0).asText());
-            String shown = cell.get(1).asText();
-            if (expected.isNumber()) {
-                assertEquals(0, expected.decimalValue().compareTo(new BigDecimal(shown)), cell.toString());
-            } else {
-                assertEquals(expected.isValueNode() ? expected.asText() : expected.toString(), shown, cell.toString());
-            }
-        }
+        JsonNode cells = assertTableShows(printed);
         for (String key : List.of("totals.tour_m", "totals.deadhead_m", "totals.deadhead_share", "network.length_m",
                 "network.odd_nodes", "tours.0.length_m", "method")) {
             assertTrue(cells.toString().contains("[\"" + key + "\""), "the table shows " + key);
@@ -164,6 +152,47 @@ class HtmlReportBrowserTest {
         for (String problem : chromium.problems()) {
             assertTrue(problem.contains("net::ERR_CONNECTION_REFUSED"), "only the refused tiles may be logged: " + problem);
         }
+    }
+
+    @Test
+    void healthCheckReportDrawsEachFindingThatHasAPlace() throws Exception {
+        // fixtures/check/planted.geojson has one planted defect of each kind (see its generator)
+        Path html = folder.resolve("health.html");
+        StringWriter out = new StringWriter();
+        StringWriter err = new StringWriter();
+        int code = Main.run(new String[] {"health", "fixtures/check/planted.geojson", "--report", html.toString(), "--json",
+            "--quiet"}, new PrintWriter(out), new PrintWriter(err));
+        assertTrue(code == 0 || code == 4, err.toString());
+        JsonNode printed = MAPPER.readTree(out.toString());
+        chromium.open(html);
+        assertEquals(List.of("streets", "finding-lines", "finding-points"), MAPPER.convertValue(
+                chromium.eval("Array.from(document.querySelectorAll('input[data-layer]')).map(b => b.dataset.layer)"), List.class));
+        int placed = 0;
+        for (JsonNode finding : printed.get("findings")) {
+            placed += finding.path("kind").asText().equals("dropped") ? 0 : 1;
+        }
+        JsonNode drawn = chromium.eval("window.streetcombReport.buckets.filter(b => b.layer.startsWith('finding-'))"
+                + ".reduce((n, b) => n + b.content.getLayers().length, 0)");
+        assertEquals(placed, drawn.asInt(), "every finding with a place is on the map");
+        assertTableShows(printed);
+        assertEquals(List.of(), chromium.problems());
+    }
+
+    /** Every number and text of the summary table is the one the command printed with --json. */
+    private static JsonNode assertTableShows(JsonNode printed) throws Exception {
+        JsonNode cells = chromium.eval("Array.from(document.querySelectorAll('#summary [data-key]'))"
+                + ".map(c => [c.dataset.key, c.textContent])");
+        assertTrue(cells.size() > 20, "the summary table has the summary's fields: " + cells.size());
+        for (JsonNode cell : cells) {
+            JsonNode expected = at(printed, cell.get(0).asText());
+            String shown = cell.get(1).asText();
+            if (expected.isNumber()) {
+                assertEquals(0, expected.decimalValue().compareTo(new BigDecimal(shown)), cell.toString());
+            } else {
+                assertEquals(expected.isValueNode() ? expected.asText() : expected.toString(), shown, cell.toString());
+            }
+        }
+        return cells;
     }
 
     private static JsonNode plan(Path layer, Path html, String... more) throws Exception {
