@@ -37,7 +37,7 @@ public final class MixedPostman {
     static final int FLIPS = 300;
 
     /** Flip trials are also limited to this many edge-solves in all, so large networks stay fast. */
-    static final int FLIP_WORK = 300_000;
+    static final int FLIP_WORK = 100_000;
 
     private MixedPostman() {
     }
