@@ -83,6 +83,40 @@ final class ComponentConnector {
         return passes;
     }
 
+    /**
+     * The sum over groups of each group's shortest distance to its nearest other group (undirected), or 0
+     * for fewer than two groups. A closed walk through all groups leaves each group for another and enters
+     * it from another, along stretches that service nothing, and each stretch between two groups is at
+     * least as long as the mean of their two nearest-group distances: so this sum is a lower bound on the
+     * deadhead of any closed tour. Each group's distance is the least link over the region boundary
+     * (Mehlhorn 1988), so one search suffices.
+     */
+    static double nearestGroupBound(StreetNetwork network, int[] group, int groups) {
+        if (groups < 2) {
+            return 0;
+        }
+        Regions regions = new Regions(network, group, Heading.ANY);
+        double[] nearest = new double[groups];
+        java.util.Arrays.fill(nearest, Double.POSITIVE_INFINITY);
+        for (int e = 0; e < network.edgeCount(); e++) {
+            int u = network.from(e);
+            int v = network.to(e);
+            int a = regions.label[u];
+            int b = regions.label[v];
+            if (a >= 0 && b >= 0 && a != b) {
+                double d = regions.distance[u] + network.length(e) + regions.distance[v];
+                nearest[a] = Math.min(nearest[a], d);
+                nearest[b] = Math.min(nearest[b], d);
+            }
+        }
+        double sum = 0;
+        for (double d : nearest) {
+            // a group that reaches no other lies in a part of its own: it adds nothing
+            sum += Double.isFinite(d) ? d : 0;
+        }
+        return sum;
+    }
+
     private static void add(StreetNetwork network, int[][] passes, int edge, int fromNode) {
         passes[network.from(edge) == fromNode ? 0 : 1][edge]++;
     }

@@ -13,8 +13,9 @@ import org.streetcomb.network.StreetNetwork;
  * whose removal keeps the tour connected (longest first), as in the shortening step of Hertz, Laporte
  * &amp; Nanchen-Hugo (1999).
  *
- * <p>Lower bound: the service length plus a minimum-cost pairing of the odd nodes of the streets to
- * service (any tour adds deadhead that makes them even; the connection is relaxed).
+ * <p>Lower bound: the service length plus the larger of a minimum-cost pairing of the odd nodes of the
+ * streets to service (any tour adds deadhead that makes them even) and, for closed tours, the sum of each
+ * group's distance to its nearest other group ({@link ComponentConnector#nearestGroupBound}).
  */
 public final class UndirectedRuralPostman {
 
@@ -43,7 +44,9 @@ public final class UndirectedRuralPostman {
         double service = demand.length(network);
         Traversals traversals = Traversals.undirected(either);
         double total = traversals.length(network);
-        double bound = service + UndirectedPostman.addMatching(problem, demand.either().clone()).cost();
+        double pairing = UndirectedPostman.addMatching(problem, demand.either().clone()).cost();
+        double joining = problem.open() ? 0 : ComponentConnector.nearestGroupBound(network, groups.group, groups.count);
+        double bound = service + Math.max(pairing, joining);
         String method = "undirected rural postman, heuristic (Frederickson's construction: spanning tree over "
                 + groups.count + " groups, " + matched.describe() + "; doubled-street removal)";
         return new Augmentation(traversals, total - service, UndirectedPostman.oddNodes(network).length, method,
