@@ -10,7 +10,16 @@ import org.streetcomb.coverage.AuditRequest;
 import org.streetcomb.coverage.CoverageGeoJsonWriter;
 import org.streetcomb.coverage.DriveAudit;
 import org.streetcomb.coverage.MatchSettings;
+import org.streetcomb.coverage.MopUpPlanner;
+import org.streetcomb.network.Components;
+import org.streetcomb.network.DepotPlacement;
+import org.streetcomb.network.LonLat;
+import org.streetcomb.network.NearestNode;
+import org.streetcomb.network.StreetNetwork;
+import org.streetcomb.plan.Plan;
+import org.streetcomb.plan.PlanRequest;
 import org.streetcomb.plan.StageClock;
+import org.streetcomb.write.TourGeoJsonWriter;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
@@ -47,6 +56,28 @@ public final class AuditCommand implements Callable<Integer> {
     @Option(names = "--missed-out", paramLabel = "FILE", description = "Write the missed parts of streets as GeoJSON lines.")
     Path missedOut;
 
+    @Option(names = "--mop-up", paramLabel = "FILE",
+            description = "Plan a tour that services only the missed parts and write it as GeoJSON; --gpx, --kml, "
+                    + "--directions and the trip options write the same tour for the field.")
+    Path mopUpOut;
+
+    @Option(names = "--mop-up-ids", paramLabel = "FILE",
+            description = "Write the ids of the streets not covered, one per line, for plan --service-ids.")
+    Path mopUpIds;
+
+    @Option(names = "--depot", paramLabel = "LON,LAT", converter = LonLatConverter.class,
+            description = "Where the mop-up tour ends (and starts, without --start), as longitude,latitude. "
+                    + "Default: the first point of the first road line, as planning does.")
+    LonLat depot;
+
+    @Option(names = "--start", paramLabel = "LON,LAT", converter = LonLatConverter.class,
+            description = "Where the crew is now: the mop-up tour starts here and ends at the depot.")
+    LonLat start;
+
+    @Option(names = "--depot-reach", paramLabel = "METRES", defaultValue = "500",
+            description = "Refuse a depot or start farther than this from the nearest street node (default: ${DEFAULT-VALUE} m).")
+    double depotReach;
+
     @Option(names = "--gps-sigma", paramLabel = "METRES", defaultValue = "10",
             description = "GPS position noise, one standard deviation (default: ${DEFAULT-VALUE} m).")
     double sigma;
@@ -78,6 +109,9 @@ public final class AuditCommand implements Callable<Integer> {
     @CommandLine.Mixin
     LayerOptions layer;
 
+    @CommandLine.Mixin
+    FieldOutputOptions field;
+
     @CommandLine.Spec
     CommandLine.Model.CommandSpec spec;
 
@@ -91,6 +125,10 @@ public final class AuditCommand implements Callable<Integer> {
         positive(beta, "--route-scale");
         positive(maxGap, "--max-gap");
         positive(maxSpeed, "--max-speed");
+        if (!(depotReach >= 0)) {
+            throw new CommandLine.ParameterException(spec.commandLine(), "--depot-reach must be 0 or more metres");
+        }
+        field.check(spec.commandLine());
         MatchSettings settings = new MatchSettings(sigma, radius, beta, maxGap, maxSpeed / 3.6);
         StageClock clock = new StageClock(TerminalProgress.forCommandLine(quiet, System.err));
         Audit audit = DriveAudit.run(new AuditRequest(layerFile, tracks, layer.snap(), settings, coveredAt, bothKerbs,
@@ -101,11 +139,42 @@ public final class AuditCommand implements Callable<Integer> {
         if (missedOut != null) {
             clock.run("write missed", () -> CoverageGeoJsonWriter.writeMissed(missedOut, audit.coverage()));
         }
+        if (mopUpIds != null) {
+            clock.run("write ids", () -> NotCoveredIds.write(mopUpIds, audit));
+        }
+        PlanSummary.Section mopUp = mopUpRequested() ? mopUp(audit, clock) : null;
         AuditSummary summary = AuditSummary.of(audit, clock.stages(), streetsOut, missedOut);
+        if (mopUp != null) {
+            summary.add(mopUp);
+        }
         PrintWriter stdout = spec.commandLine().getOut();
         stdout.print(json ? summary.toJson() : summary.toText());
         stdout.flush();
         return ExitCode.OK;
+    }
+
+    private boolean mopUpRequested() {
+        return mopUpOut != null || field.gpx != null || field.kml != null || field.directions != null;
+    }
+
+    /** Plans the mop-up tour and writes it; returns its part of the summary. */
+    private PlanSummary.Section mopUp(Audit audit, StageClock clock) {
+        StreetNetwork network = audit.coverage().network();
+        NearestNode.Hit depotHit = DepotPlacement.place(network, network.features(), depot, depotReach, layerFile);
+        int first = start == null ? depotHit.node()
+                : DepotPlacement.place(network, network.features(), start, depotReach, layerFile).node();
+        MopUpPlanner.MopUp planned = clock.time("mop-up", () ->
+                MopUpPlanner.plan(audit.coverage(), depotHit.node(), first, layerFile.getFileName().toString()));
+        if (planned == null) {
+            return MopUpSection.nothing();
+        }
+        Plan plan = field.arrange(new Plan(new PlanRequest(layerFile, depot, layer.snap(), depotReach, false,
+                layer.readOptions()), audit.read(), network, Components.of(network), depotHit.node(),
+                depot == null ? 0 : depotHit.distance(), planned.augmentation(), planned.tours(), List.of()), clock);
+        if (mopUpOut != null) {
+            clock.run("write mop-up", () -> new TourGeoJsonWriter(false).write(mopUpOut, network, plan.tours()));
+        }
+        return MopUpSection.of(plan, planned, field.write(plan, clock), mopUpOut);
     }
 
     private void positive(double value, String option) {

@@ -173,8 +173,15 @@ final class AuditSummary {
         if (missedOut != null) {
             s.line("Written", "%s", missedOut);
         }
-        s.line("Caution", "%s", CAUTION);
         return s;
+    }
+
+    /** Adds a part to the summary (the mop-up tour), after what is there. */
+    void add(PlanSummary.Section section) {
+        json.set(section.key(), section.json());
+        for (String[] labelled : section.lines()) {
+            line(labelled[0], "%s", labelled[1]);
+        }
     }
 
     /** Required streets that are not covered, least driven first, then in layer order. */
@@ -202,7 +209,7 @@ final class AuditSummary {
     }
 
     String toText() {
-        return text.toString();
+        return text + String.format(Locale.ROOT, "%-9s %s%n", "Caution", CAUTION);
     }
 
     String toJson() {

@@ -142,6 +142,71 @@ class AuditCommandTest {
     }
 
     @Test
+    void theMopUpTourServicesTheMissedStreetsAndDrivingItCompletesTheRound() throws IOException, InterruptedException {
+        Path mopUp = dir.resolve("mop-up.geojson");
+        Path gpx = dir.resolve("mop-up.gpx");
+        Run r = run("audit", DEMO, drive.toString(), "--depot=-31.2,44.6", "--mop-up", mopUp.toString(),
+                "--gpx", gpx.toString(), "--json");
+        assertEquals(ExitCode.OK, r.code(), r.err());
+        JsonNode summary = new ObjectMapper().readTree(r.out());
+        assertTrue(summary.at("/mop_up/planned").asBoolean(), r.out());
+        assertFalse(summary.at("/mop_up/open").asBoolean());
+        // the tour services at least the skipped streets and no more than what the audit found missed
+        double skippedLength = 0;
+        for (JsonNode street : summary.at("/coverage/not_covered")) {
+            skippedLength += street.get("needed_m").asDouble() - street.get("driven_m").asDouble();
+        }
+        double service = summary.at("/mop_up/service_m").asDouble();
+        assertTrue(service >= 0.9 * skippedLength && service <= summary.at("/coverage/missed_m").asDouble(), r.out());
+        // gpsbabel reads the GPX of the mop-up as a GPS unit would
+        String babel = ExternalTool.run("gpsbabel", "-i", "gpx", "-f", gpx.toString(), "-x", "nuketypes,waypoints,routes",
+                "-o", "csv", "-F", "-");
+        assertEquals(summary.at("/mop_up/field/gpx/track_points").asInt(), babel.lines().filter(l -> !l.isBlank()).count());
+
+        // drive the mop-up (simulated, like the first drive) and audit both drives: nothing is left
+        var audit = org.streetcomb.coverage.DriveAudit.run(new org.streetcomb.coverage.AuditRequest(Path.of(DEMO),
+                List.of(drive), 0.5, org.streetcomb.coverage.MatchSettings.defaults(), 0.9, false,
+                org.streetcomb.read.ReadOptions.DEFAULTS), new org.streetcomb.plan.StageClock(org.streetcomb.plan.StageClock.SILENT));
+        StreetNetwork network = audit.coverage().network();
+        int depot = NearestNode.of(network, -31.2, 44.6).node();
+        var planned = org.streetcomb.coverage.MopUpPlanner.plan(audit.coverage(), depot, depot, "demo");
+        Path second = dir.resolve("mop-up-drive.gpx");
+        SimulatedDrive.writeGpx(second, SimulatedDrive.drive(network, planned.tours(),
+                new SimulatedDrive.Settings(20, 40, 1, 5, 10, 300, 2, 10), 8, SimulatedDrive.START + 86_400), true);
+        Run after = run("audit", DEMO, drive.toString(), second.toString(), "--json", "--mop-up", dir.resolve("none.geojson").toString());
+        JsonNode done = new ObjectMapper().readTree(after.out());
+        assertEquals(0, done.at("/coverage/not_covered").size(), after.out());
+        assertFalse(done.at("/mop_up/planned").asBoolean(), after.out());
+        assertFalse(Files.exists(dir.resolve("none.geojson")), "no tour file when there is nothing to mop up");
+    }
+
+    @Test
+    void aMopUpFromWhereTheCrewIsEndsAtTheDepotAndTheIdsFileFeedsThePlanner() throws IOException {
+        Path ids = dir.resolve("ids.txt");
+        // start at the far (north-east) end of the town
+        Run r = run("audit", DEMO, drive.toString(), "--depot=-31.2,44.6", "--start=-31.183,44.6068",
+                "--mop-up", dir.resolve("open.geojson").toString(), "--mop-up-ids", ids.toString(), "--json");
+        assertEquals(ExitCode.OK, r.code(), r.err());
+        JsonNode summary = new ObjectMapper().readTree(r.out());
+        assertTrue(summary.at("/mop_up/open").asBoolean(), r.out());
+        JsonNode tour = new ObjectMapper().readTree(dir.resolve("open.geojson").toFile()).at("/features/0/geometry/coordinates");
+        assertEquals(-31.2, tour.get(tour.size() - 1).get(0).asDouble(), 1e-6, "ends at the depot");
+        assertEquals(44.6, tour.get(tour.size() - 1).get(1).asDouble(), 1e-6);
+        assertTrue(Math.abs(tour.get(0).get(0).asDouble() + 31.183) < 0.001, "starts where the crew is");
+
+        assertEquals(Set.copyOf(SKIPPED), Set.copyOf(Files.readAllLines(ids).stream().filter(l -> !l.startsWith("#")).toList()));
+        Run plan = run("plan", DEMO, "--depot=-31.2,44.6", "--service-ids", ids.toString(), "--json");
+        assertEquals(ExitCode.OK, plan.code(), plan.err());
+        JsonNode planned = new ObjectMapper().readTree(plan.out());
+        // whole streets: the planner services the full length of both skipped streets
+        double skippedLength = 0;
+        for (JsonNode street : summary.at("/coverage/not_covered")) {
+            skippedLength += street.get("needed_m").asDouble();
+        }
+        assertEquals(skippedLength, planned.at("/totals/service_m").asDouble(), 0.01, plan.out());
+    }
+
+    @Test
     void aTrackFarFromTheLayerIsRefusedWithOneLine() {
         // a real car drive in Istria (gpxpy test data) against the invented town in the Atlantic
         Path streets = dir.resolve("far-streets.geojson");
