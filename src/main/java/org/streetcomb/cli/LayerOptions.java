@@ -84,6 +84,11 @@ public final class LayerOptions {
                     + "different levels meet only where one of them ends.")
     String levelField;
 
+    @Option(names = "--cost-field", paramLabel = "FIELD", order = 115,
+            description = "Attribute giving each street's cost (travel minutes, say): tours then minimise total cost "
+                    + "instead of length, and summaries report cost beside metres.")
+    String costField;
+
     @CommandLine.Spec(CommandLine.Spec.Target.MIXEE)
     CommandLine.Model.CommandSpec mixee;
 
@@ -100,7 +105,7 @@ public final class LayerOptions {
         return new ReadOptions(nameField, onewayField,
                 values(onewayForward, d.onewayForward()), values(onewayBackward, d.onewayBackward()),
                 values(onewayBoth, d.onewayBoth()), keep, drop, requiredField, mode, serviceRoads, privateRoads, crs,
-                gradeSeparated || levelField != null, levelField);
+                gradeSeparated || levelField != null, levelField, costField);
     }
 
     private static Set<String> values(List<String> given, Set<String> defaults) {

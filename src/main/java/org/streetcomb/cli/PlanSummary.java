@@ -72,8 +72,15 @@ final class PlanSummary {
         totals.put("service_m", metres(plan.serviceLength()));
         totals.put("deadhead_m", metres(deadhead));
         totals.put("deadhead_share", share(deadhead, tour));
-        totals.put("lower_bound_m", metres(plan.augmentation().lowerBound()));
-        totals.put("gap", share(tour - plan.augmentation().lowerBound(), plan.augmentation().lowerBound()));
+        double objective = network.hasCosts() ? cost(plan, network) : tour;
+        if (network.hasCosts()) {
+            totals.put("network_cost", metres(network.weightedByCost().totalLength()));
+            totals.put("tour_cost", metres(objective));
+            totals.put("lower_bound_cost", metres(plan.augmentation().lowerBound()));
+        } else {
+            totals.put("lower_bound_m", metres(plan.augmentation().lowerBound()));
+        }
+        totals.put("gap", share(objective - plan.augmentation().lowerBound(), plan.augmentation().lowerBound()));
         ArrayNode tours = s.json.putArray("tours");
         for (int t = 0; t < plan.tours().size(); t++) {
             Tour tr = plan.tours().get(t);
@@ -115,10 +122,21 @@ final class PlanSummary {
         line("Tour", "%.3f km: service %.3f km, deadhead %.3f km (%.1f %%)", tour / 1000, plan.serviceLength() / 1000,
                 deadhead / 1000, tour == 0 ? 0 : 100 * deadhead / tour);
         double bound = plan.augmentation().lowerBound();
-        line("Bound", "%.3f km: no tour can be shorter%s", bound / 1000, plan.augmentation().certified()
-                ? "; this one is optimal"
-                : String.format(Locale.ROOT, "; this one is at most %.2f %% longer than the optimum",
-                        bound == 0 ? 0 : 100 * (tour - bound) / bound));
+        double objective = tour;
+        if (network.hasCosts()) {
+            objective = cost(plan, network);
+            line("Cost", "%.3f for the tour, %.3f for the streets (the cost field's units); tours minimise cost",
+                    objective, network.weightedByCost().totalLength());
+            line("Bound", "cost %.3f: no tour can cost less%s", bound, plan.augmentation().certified()
+                    ? "; this one is optimal"
+                    : String.format(Locale.ROOT, "; this one costs at most %.2f %% more than the optimum",
+                            bound == 0 ? 0 : 100 * (objective - bound) / bound));
+        } else {
+            line("Bound", "%.3f km: no tour can be shorter%s", bound / 1000, plan.augmentation().certified()
+                    ? "; this one is optimal"
+                    : String.format(Locale.ROOT, "; this one is at most %.2f %% longer than the optimum",
+                            bound == 0 ? 0 : 100 * (objective - bound) / bound));
+        }
         Tour first = plan.tours().get(0);
         if (first.end(network) != first.start()) {
             int end = first.end(network);
@@ -148,6 +166,12 @@ final class PlanSummary {
         if (out != null) {
             line("Written", "%s", out);
         }
+    }
+
+    /** The tours' total cost, from the cost field, for a network that has costs. */
+    private static double cost(Plan plan, StreetNetwork network) {
+        StreetNetwork costs = network.weightedByCost();
+        return plan.tours().stream().mapToDouble(t -> t.length(costs)).sum();
     }
 
     private static String skippedText(Map<String, Integer> skipped) {

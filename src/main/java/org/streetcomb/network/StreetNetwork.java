@@ -29,6 +29,7 @@ public final class StreetNetwork {
     private final List<RoadFeature> features;
     private final int[] adjacencyStart;
     private final int[] adjacentEdges;
+    private final double[] edgeCost;
 
     StreetNetwork(double[] nodeLon, double[] nodeLat, int[] edgeFrom, int[] edgeTo, double[] edgeLength,
                   int[] edgeFeature, int[] pointStart, double[] points, List<RoadFeature> features) {
@@ -63,6 +64,24 @@ public final class StreetNetwork {
             adjacentEdges[fill[edgeFrom[e]]++] = e;
             adjacentEdges[fill[edgeTo[e]]++] = e;
         }
+        this.edgeCost = features.stream().anyMatch(RoadFeature::hasCost) ? shareCosts() : null;
+    }
+
+    /** Each feature's cost shared among its edges in proportion to their lengths. */
+    private double[] shareCosts() {
+        double[] featureLength = new double[features.size()];
+        int[] featureEdges = new int[features.size()];
+        for (int e = 0; e < edgeFrom.length; e++) {
+            featureLength[edgeFeature[e]] += edgeLength[e];
+            featureEdges[edgeFeature[e]]++;
+        }
+        double[] cost = new double[edgeFrom.length];
+        for (int e = 0; e < cost.length; e++) {
+            int f = edgeFeature[e];
+            double whole = features.get(f).hasCost() ? features.get(f).cost() : 0;
+            cost[e] = featureLength[f] > 0 ? whole * edgeLength[e] / featureLength[f] : whole / featureEdges[f];
+        }
+        return cost;
     }
 
     /**
@@ -177,6 +196,28 @@ public final class StreetNetwork {
 
     public double pointLat(int edge, int i) {
         return points[2 * (pointStart[edge] + i) + 1];
+    }
+
+    /** Whether the layer gave each street a cost (a cost field) to use as its weight. */
+    public boolean hasCosts() {
+        return edgeCost != null;
+    }
+
+    /** The edge's share of its street's cost, in the layer's cost units; 0 when the layer has no costs. */
+    public double cost(int edge) {
+        return edgeCost == null ? 0 : edgeCost[edge];
+    }
+
+    /**
+     * The same network with each edge's cost as its length, for solvers that minimise length: the tours
+     * they make then minimise total cost. Edge and node ids are the same as this network's.
+     */
+    public StreetNetwork weightedByCost() {
+        if (edgeCost == null) {
+            throw new IllegalStateException("the network has no costs");
+        }
+        return new StreetNetwork(nodeLon, nodeLat, edgeFrom, edgeTo, edgeCost.clone(), edgeFeature, pointStart, points,
+                features);
     }
 
     public double totalLength() {

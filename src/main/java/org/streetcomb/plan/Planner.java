@@ -55,7 +55,9 @@ public final class Planner {
                     : String.format(Locale.ROOT, "the network has %d separate parts: one tour is planned for each",
                       components.count()));
         }
-        PostmanProblem asked = PostmanSetup.problem(request, network, components, depot.node(), warnings);
+        // with a cost field the solvers minimise cost: they see each edge's cost as its length
+        StreetNetwork weighted = network.hasCosts() ? network.weightedByCost() : network;
+        PostmanProblem asked = PostmanSetup.problem(request, weighted, components, depot.node(), warnings);
         PostmanProblem problem;
         try {
             problem = ReachabilityCheck.check(asked, request.input().getFileName().toString(),

@@ -1,9 +1,11 @@
 package org.streetcomb.read;
 
+import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 import java.util.Set;
 import org.locationtech.jts.geom.LineString;
+import org.streetcomb.InputError;
 
 /**
  * Turns a geometric layer's feature attributes into road features as {@link ReadOptions} says: keeps or
@@ -39,10 +41,41 @@ final class AttributeMapping {
         return true;
     }
 
-    /** The road feature for one line of a kept feature. */
-    RoadFeature road(String id, Map<String, String> properties, LineString line, ReadTally tally) {
+    /**
+     * Keeps the lines of a kept feature as road features; a multi-part feature's cost is shared among its
+     * lines in proportion to their lengths.
+     *
+     * @param place where the feature is in the file, for an error message
+     */
+    void keep(String id, Map<String, String> properties, List<LineString> lines, ReadTally tally, String place) {
         String name = properties.getOrDefault(options.nameField(), "");
-        return new RoadFeature(id, name, line, travel(properties, tally), required(properties), properties);
+        Travel travel = travel(properties, tally);
+        boolean required = required(properties);
+        double cost = cost(properties, place);
+        double total = lines.stream().mapToDouble(LineString::getLength).sum();
+        for (LineString line : lines) {
+            double share = total > 0 ? line.getLength() / total : 1.0 / lines.size();
+            tally.keep(new RoadFeature(id, name, line, travel, required, properties, cost * share));
+        }
+    }
+
+    /** The feature's cost from the cost field, or NaN when no cost field is named. */
+    private double cost(Map<String, String> properties, String place) {
+        if (options.costField() == null) {
+            return Double.NaN;
+        }
+        String raw = properties.get(options.costField());
+        double cost;
+        try {
+            cost = raw == null ? Double.NaN : Double.parseDouble(raw.trim());
+        } catch (NumberFormatException e) {
+            cost = Double.NaN;
+        }
+        if (!(cost >= 0) || Double.isInfinite(cost)) {
+            throw new InputError(place + ": cost field " + options.costField() + " holds "
+                    + (raw == null ? "nothing" : "'" + raw + "'") + ": expected a number of 0 or more for every street");
+        }
+        return cost;
     }
 
     private Travel travel(Map<String, String> properties, ReadTally tally) {

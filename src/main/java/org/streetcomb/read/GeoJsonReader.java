@@ -11,8 +11,10 @@ import java.io.IOException;
 import java.io.InputStream;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.ArrayList;
 import java.util.Iterator;
 import java.util.LinkedHashMap;
+import java.util.List;
 import java.util.Map;
 import org.locationtech.jts.geom.Coordinate;
 import org.locationtech.jts.geom.GeometryFactory;
@@ -126,16 +128,17 @@ public final class GeoJsonReader implements LayerReader {
                 return;
             }
             String id = featureId(feature, properties, number);
+            List<LineString> lines = new ArrayList<>();
             if (type.equals("LineString")) {
-                add(id, properties, coordinates, place);
-                return;
-            }
-            if (coordinates == null || !coordinates.isArray()) {
+                add(lines, coordinates, place);
+            } else if (coordinates == null || !coordinates.isArray()) {
                 throw InputError.at(file, place, "MultiLineString without a coordinates array");
+            } else {
+                for (JsonNode part : coordinates) {
+                    add(lines, part, place);
+                }
             }
-            for (JsonNode part : coordinates) {
-                add(id, properties, part, place);
-            }
+            mapping.keep(id, properties, lines, tally, file + ": " + place);
         }
 
         private String featureId(JsonNode feature, Map<String, String> properties, int number) {
@@ -146,7 +149,7 @@ public final class GeoJsonReader implements LayerReader {
             return properties.getOrDefault("id", "#" + number);
         }
 
-        private void add(String id, Map<String, String> properties, JsonNode positions, String place) {
+        private void add(List<LineString> lines, JsonNode positions, String place) {
             if (positions == null || !positions.isArray()) {
                 throw InputError.at(file, place, "LineString without a coordinates array");
             }
@@ -160,8 +163,7 @@ public final class GeoJsonReader implements LayerReader {
                 coords[i] = position(position, place + ", position " + (i + 1));
                 i++;
             }
-            LineString line = GEOMETRY.createLineString(coords);
-            tally.keep(mapping.road(id, properties, line, tally));
+            lines.add(GEOMETRY.createLineString(coords));
         }
 
         private Coordinate position(JsonNode position, String place) {

@@ -13,7 +13,18 @@ import org.locationtech.jts.geom.LineString;
  * @param travel     permitted directions of travel
  * @param required   whether the street must be serviced (all streets unless a layer says otherwise)
  * @param properties the feature's scalar attributes, as text
+ * @param cost       the cost of travelling the whole line (minutes, say) from the layer's cost field, or
+ *                   NaN when the layer gives none and geodesic length is the weight
  */
 public record RoadFeature(String id, String name, LineString line, Travel travel, boolean required,
-                          Map<String, String> properties) {
+                          Map<String, String> properties, double cost) {
+
+    public RoadFeature(String id, String name, LineString line, Travel travel, boolean required,
+                       Map<String, String> properties) {
+        this(id, name, line, travel, required, properties, Double.NaN);
+    }
+
+    public boolean hasCost() {
+        return !Double.isNaN(cost);
+    }
 }

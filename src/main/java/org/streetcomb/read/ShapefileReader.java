@@ -8,12 +8,15 @@ import java.nio.charset.StandardCharsets;
 import java.nio.file.DirectoryStream;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.ArrayList;
 import java.util.Comparator;
+import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 import java.util.stream.Stream;
 import org.locationtech.jts.geom.Coordinate;
 import org.locationtech.jts.geom.GeometryFactory;
+import org.locationtech.jts.geom.LineString;
 import org.locationtech.jts.geom.PrecisionModel;
 import org.opengis.referencing.crs.CoordinateReferenceSystem;
 import org.streetcomb.InputError;
@@ -80,9 +83,12 @@ final class ShapefileReader implements LayerReader {
                 if (shape.parts().length == 0) {
                     tally.skip("null shape");
                 } else if (mapping.keeps(properties, tally)) {
+                    List<LineString> lines = new ArrayList<>();
                     for (double[] xy : shape.parts()) {
-                        addLine(String.valueOf(shape.number()), properties, xy, toWgs84, tally, label, shape.number());
+                        addLine(lines, xy, toWgs84, tally, label, shape.number());
                     }
+                    mapping.keep(String.valueOf(shape.number()), properties, lines, tally,
+                            label + ": record " + shape.number());
                 }
             }
             if (shapes.recordsRead() != indexed) {
@@ -99,8 +105,8 @@ final class ShapefileReader implements LayerReader {
         }
     }
 
-    private void addLine(String id, Map<String, String> properties, double[] xy, Wgs84Transform toWgs84,
-                         ReadTally tally, String label, int record) {
+    private static void addLine(List<LineString> lines, double[] xy, Wgs84Transform toWgs84, ReadTally tally,
+                                String label, int record) {
         int n = xy.length / 2;
         if (n < 2) {
             tally.skip("line part with fewer than 2 points");
@@ -117,7 +123,7 @@ final class ShapefileReader implements LayerReader {
             }
             coords[i] = new Coordinate(lon, lat);
         }
-        tally.keep(mapping.road(id, properties, GEOMETRY.createLineString(coords), tally));
+        lines.add(GEOMETRY.createLineString(coords));
     }
 
     private CoordinateReferenceSystem crs(Path prj, String label) {

@@ -37,7 +37,8 @@ class LayerOptionsTest {
     void parsesEveryOption() {
         ReadOptions o = parse("--name-field=STREET", "--oneway-field=DIR", "--oneway-forward=FT,W",
                 "--oneway-backward=TF", "--oneway-both=B", "--keep=CLASS=a,b", "--drop=USE=private",
-                "--required-field=GRIT", "--mode=WALK", "--service-roads", "--private-roads", "--crs=EPSG:27700")
+                "--required-field=GRIT", "--mode=WALK", "--service-roads", "--private-roads", "--crs=EPSG:27700",
+                "--level-field=LAYER", "--cost-field=MINUTES")
                 .layer.readOptions();
         assertEquals("STREET", o.nameField());
         assertEquals(Set.of("ft", "w"), o.onewayForward());
@@ -49,6 +50,9 @@ class LayerOptionsTest {
         assertEquals(TravelMode.WALK, o.mode());
         assertEquals("EPSG:27700", o.crs());
         assertEquals(true, o.serviceRoads() && o.privateRoads());
+        assertEquals(true, o.gradeSeparated());
+        assertEquals("LAYER", o.levelField());
+        assertEquals("MINUTES", o.costField());
     }
 
     @Test

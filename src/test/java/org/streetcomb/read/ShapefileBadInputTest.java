@@ -75,6 +75,12 @@ class ShapefileBadInputTest {
     }
 
     @Test
+    void costFieldWithoutAValue() throws IOException {
+        Path shp = copy(MESA, "streets");
+        assertRefused(shp, "streets.shp: record 1: cost field MINUTES holds nothing", "--crs=EPSG:2223", "--cost-field=MINUTES");
+    }
+
+    @Test
     void missingPrjWithoutCrsOption() throws IOException {
         Path shp = copy(MESA, "streets");
         Files.delete(dir.resolve("streets.prj"));
