@@ -16,7 +16,7 @@ import org.streetcomb.plan.Planner;
 import org.streetcomb.plan.StageClock;
 
 /**
- * Benchmark of the HTML report and PNG quick look (run by bench/report-bench, not by the tests): writes both
+ * Benchmark of the HTML report and PNG quick look (run by docs/report-bench.sh, not by the tests): writes both
  * for the demo town and for a generated grid town of about 100 000 edges (every block its own feature, the
  * worst case for drawing), then opens each report in headless Chromium three times. Prints file sizes,
  * write times as ratios to the time the plan itself took, and browser load times as ratios to the demo's.
