@@ -180,9 +180,9 @@ public final class FieldOutputOptions {
             node.put("routes", written.routes());
             node.put("route_points", written.routePoints());
             node.put("waypoints", written.waypoints());
-            text.add(new String[] {"GPX", String.format(Locale.ROOT, "%s: %d tracks with %d points%s, %d waypoints",
+            text.add(new String[] {"GPX", String.format(Locale.ROOT, "%s: %d track(s) with %d points%s, %d waypoint(s)",
                     gpx, written.tracks(), written.trackPoints(), routes ? String.format(Locale.ROOT,
-                    ", %d routes with %d points", written.routes(), written.routePoints()) : "", written.waypoints())});
+                    ", %d route(s) with %d points", written.routes(), written.routePoints()) : "", written.waypoints())});
         }
         if (kml != null) {
             clock.run("kml", () -> new KmlTourWriter(simplify).write(kml, plan.network(), plan.depot(), tours, label));

@@ -32,8 +32,7 @@ import org.streetcomb.network.StreetNetwork;
  * <li>The circuit is opened at the start node where its costliest transition is, since the start and the
  * final arrival are not turns.</li>
  * </ol>
- * Which traversals of a street in one direction are service and which deadhead is reassigned so the
- * earliest ones service it, keeping their number. Patching is a heuristic (the least-turn Euler tour is
+ * The service passes are then moved to the earliest passes that can carry them ({@link EarliestService}). Patching is a heuristic (the least-turn Euler tour is
  * NP-hard in general), so the result is kept only when it has no more U-turns, then no more crossing
  * turns, then no higher turn cost than the input; otherwise the input is returned unchanged.
  * O(sum over nodes of k^3 + k^2 log k) for k traversals through a node, about linear on street networks.
@@ -249,31 +248,17 @@ public final class TurnAwareOrder {
             }
             int[] edges = new int[m];
             boolean[] forward = new boolean[m];
-            int[] servicePasses = new int[2 * edgeBound()];
-            for (int t = 0; t < m; t++) {
-                if (tour.service()[t]) {
-                    servicePasses[slot(t)]++;
-                }
-            }
             boolean[] service = new boolean[m];
             int t = first;
             for (int i = 0; i < m; i++, t = successor[t]) {
                 edges[i] = tour.edges()[t];
                 forward[i] = tour.forward()[t];
-                service[i] = servicePasses[slot(t)]-- > 0;
+                service[i] = tour.service()[t];
             }
             if (t != first) {
                 throw new IllegalStateException("patched walk is not one circuit");
             }
-            return new Tour(tour.start(), edges, forward, service);
-        }
-
-        private int edgeBound() {
-            return Arrays.stream(tour.edges()).max().orElse(0) + 1;
-        }
-
-        private int slot(int t) {
-            return 2 * tour.edges()[t] + (tour.forward()[t] ? 0 : 1);
+            return EarliestService.of(new Tour(tour.start(), edges, forward, service));
         }
     }
 }

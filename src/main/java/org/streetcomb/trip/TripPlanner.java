@@ -7,6 +7,7 @@ import java.util.Random;
 import org.streetcomb.network.DijkstraSearch;
 import org.streetcomb.network.Heading;
 import org.streetcomb.network.StreetNetwork;
+import org.streetcomb.tour.EarliestService;
 import org.streetcomb.tour.Tour;
 import org.streetcomb.tour.TourValidator;
 
@@ -19,8 +20,9 @@ import org.streetcomb.tour.TourValidator;
  * {@link TripLocalSearch}; the improved trips, joined end to end, are cut again while that helps. Further
  * giant tours, treated the same way, are drawn alternately by a randomised nearest-task rule and by
  * shaking the best solution's giant tour (iterated local search), seeded so runs repeat exactly; the
- * cheapest result wins. Trips are driven between services by shortest paths, and every
- * trip is checked by {@link TourValidator}. Local improvement needs a distance table over the task ends
+ * cheapest result wins. Trips are driven between services by shortest paths, a street driven
+ * twice in one trip is serviced on the first pass ({@link EarliestService}), and every trip is checked by
+ * {@link TourValidator}. Local improvement needs a distance table over the task ends
  * ({@link NodeDistances}); on networks whose tasks have more ends than it holds, the tour is only cut.
  */
 public final class TripPlanner {
@@ -255,7 +257,7 @@ public final class TripPlanner {
                 mustCover[k] = e;
             }
             connect(search, at, depot, steps);
-            Tour tour = toTour(steps);
+            Tour tour = EarliestService.of(toTour(steps));
             List<String> problems = TourValidator.problems(network, tour, mustCover);
             if (!problems.isEmpty()) {
                 throw new IllegalStateException("invalid trip: " + problems);

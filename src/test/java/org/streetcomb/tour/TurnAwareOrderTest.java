@@ -48,6 +48,8 @@ class TurnAwareOrderTest {
             assertEquals(Math.round(plain.length(network) * 1000), Math.round(ordered.length(network) * 1000));
             assertEquals(Math.round(plain.deadhead(network) * 1000), Math.round(ordered.deadhead(network) * 1000));
             assertArrayEquals(traversals(plain), traversals(ordered), "the same multiset of directed traversals");
+            assertArrayEquals(servicePasses(network, plain), servicePasses(network, ordered), "each street serviced as often");
+            assertServiceOnFirstPass(network, ordered);
             TurnCounts p = TurnCounts.of(network, bearings, side, plain);
             TurnCounts o = TurnCounts.of(network, bearings, side, ordered);
             assertTrue(o.uTurns() <= p.uTurns(), "U-turns " + p.uTurns() + " -> " + o.uTurns());
@@ -58,14 +60,35 @@ class TurnAwareOrderTest {
         assertTrue(after.uTurns() < before.uTurns(), "the reorder should find fewer U-turns on " + name);
     }
 
-    /** Each traversal as edge, direction and pass, sorted. */
+    /** Each traversal as edge and direction, sorted. */
     private static long[] traversals(Tour tour) {
         long[] keys = new long[tour.steps()];
         for (int i = 0; i < keys.length; i++) {
-            keys[i] = 4L * tour.edges()[i] + (tour.forward()[i] ? 2 : 0) + (tour.service()[i] ? 1 : 0);
+            keys[i] = 2L * tour.edges()[i] + (tour.forward()[i] ? 1 : 0);
         }
         Arrays.sort(keys);
         return keys;
+    }
+
+    private static int[] servicePasses(StreetNetwork network, Tour tour) {
+        int[] passes = new int[network.edgeCount()];
+        for (int i = 0; i < tour.steps(); i++) {
+            passes[tour.edges()[i]] += tour.service()[i] ? 1 : 0;
+        }
+        return passes;
+    }
+
+    /** A street serviced once is serviced the first time it is driven (common practice: no pass wasted). */
+    private static void assertServiceOnFirstPass(StreetNetwork network, Tour tour) {
+        int[] passes = servicePasses(network, tour);
+        boolean[] seen = new boolean[network.edgeCount()];
+        for (int i = 0; i < tour.steps(); i++) {
+            int e = tour.edges()[i];
+            if (passes[e] == 1 && !seen[e]) {
+                assertTrue(tour.service()[i], "first pass of edge " + e + " is deadhead");
+            }
+            seen[e] = true;
+        }
     }
 
     private static int deadEndVisits(StreetNetwork network, Tour tour) {
