@@ -8,10 +8,6 @@ package org.streetcomb.trip;
  */
 public record TripLimit(double perServiceMetre, double perDeadheadMetre, double perDemand, double max) {
 
-    public static TripLimit none() {
-        return new TripLimit(0, 0, 0, Double.POSITIVE_INFINITY);
-    }
-
     public static TripLimit length(double maxMetres) {
         return new TripLimit(1, 1, 0, maxMetres);
     }
