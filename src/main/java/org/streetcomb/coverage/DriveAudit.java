@@ -28,7 +28,7 @@ public final class DriveAudit {
     public static Audit run(AuditRequest request, StageClock clock) {
         RoadLayer layer = clock.time("read", () -> LayerReaders.read(request.layer(), request.readOptions()));
         StreetNetwork network = clock.time("network",
-                () -> new NetworkBuilder(request.snapTolerance()).build(layer.features()));
+                () -> new NetworkBuilder(request.snapTolerance()).build(layer));
         if (network.edgeCount() == 0) {
             throw InputError.at(request.layer(), null, "no street of positive length after noding");
         }
