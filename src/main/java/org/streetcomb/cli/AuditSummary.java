@@ -1,8 +1,8 @@
 package org.streetcomb.cli;
 
-import com.fasterxml.jackson.core.JsonProcessingException;
-import com.fasterxml.jackson.databind.ObjectMapper;
-import com.fasterxml.jackson.databind.SerializationFeature;
+import static org.streetcomb.cli.SummaryFormat.metres;
+import static org.streetcomb.cli.SummaryFormat.share;
+
 import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.math.BigDecimal;
@@ -25,14 +25,13 @@ import org.streetcomb.plan.StageClock;
  */
 final class AuditSummary {
 
-    private static final ObjectMapper MAPPER = new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT);
     static final String CAUTION = "Coverage is inferred from GPS tracks, which wander and drop out, and from map data, "
             + "which may be out of date: check doubtful streets on the ground. Obey traffic law and signs and never "
             + "handle a device while driving.";
     /** Streets not covered that the text lists by name; --json lists all. */
     private static final int STREETS_LISTED = 10;
 
-    private final ObjectNode json = MAPPER.createObjectNode();
+    private final ObjectNode json = SummaryFormat.newObject();
     private final StringBuilder text = new StringBuilder();
 
     private AuditSummary() {
@@ -197,26 +196,16 @@ final class AuditSummary {
     }
 
     private void line(String label, String format, Object... args) {
-        text.append(String.format(Locale.ROOT, "%-9s %s%n", label, String.format(Locale.ROOT, format, args)));
+        SummaryFormat.line(text, label, format, args);
     }
 
-    private static BigDecimal metres(double value) {
-        return BigDecimal.valueOf(value).setScale(3, RoundingMode.HALF_EVEN);
-    }
 
-    private static BigDecimal share(double part, double whole) {
-        return BigDecimal.valueOf(whole == 0 ? 0 : part / whole).setScale(6, RoundingMode.HALF_EVEN);
-    }
 
     String toText() {
         return text + String.format(Locale.ROOT, "%-9s %s%n", "Caution", CAUTION);
     }
 
     String toJson() {
-        try {
-            return MAPPER.writeValueAsString(json) + System.lineSeparator();
-        } catch (JsonProcessingException e) {
-            throw new IllegalStateException(e);
-        }
+        return SummaryFormat.json(json);
     }
 }

@@ -1,8 +1,5 @@
 package org.streetcomb.cli;
 
-import com.fasterxml.jackson.core.JsonProcessingException;
-import com.fasterxml.jackson.databind.ObjectMapper;
-import com.fasterxml.jackson.databind.SerializationFeature;
 import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.math.BigDecimal;
@@ -25,12 +22,11 @@ import org.streetcomb.plan.StageClock;
  */
 final class HealthSummary {
 
-    private static final ObjectMapper MAPPER = new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT);
 
     /** Findings of each kind listed in the text summary; --json and --out list all. */
     private static final int LISTED = 10;
 
-    private final ObjectNode json = MAPPER.createObjectNode();
+    private final ObjectNode json = SummaryFormat.newObject();
     private final StringBuilder text = new StringBuilder();
 
     private HealthSummary() {
@@ -128,7 +124,7 @@ final class HealthSummary {
     }
 
     private void line(String label, String format, Object... args) {
-        text.append(String.format(Locale.ROOT, "%-9s %s%n", label, String.format(Locale.ROOT, format, args)));
+        SummaryFormat.line(text, label, format, args);
     }
 
     private static BigDecimal round(double value, int decimals) {
@@ -149,10 +145,6 @@ final class HealthSummary {
     }
 
     String toJson() {
-        try {
-            return MAPPER.writeValueAsString(json) + System.lineSeparator();
-        } catch (JsonProcessingException e) {
-            throw new IllegalStateException(e);
-        }
+        return SummaryFormat.json(json);
     }
 }

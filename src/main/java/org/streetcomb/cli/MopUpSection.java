@@ -1,9 +1,9 @@
 package org.streetcomb.cli;
 
+import static org.streetcomb.cli.SummaryFormat.metres;
+
 import com.fasterxml.jackson.databind.node.JsonNodeFactory;
 import com.fasterxml.jackson.databind.node.ObjectNode;
-import java.math.BigDecimal;
-import java.math.RoundingMode;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
@@ -54,7 +54,4 @@ final class MopUpSection {
         return new PlanSummary.Section("mop_up", json, lines);
     }
 
-    private static BigDecimal metres(double value) {
-        return BigDecimal.valueOf(value).setScale(3, RoundingMode.HALF_EVEN);
-    }
 }

@@ -1,8 +1,8 @@
 package org.streetcomb.cli;
 
-import com.fasterxml.jackson.core.JsonProcessingException;
-import com.fasterxml.jackson.databind.ObjectMapper;
-import com.fasterxml.jackson.databind.SerializationFeature;
+import static org.streetcomb.cli.SummaryFormat.metres;
+import static org.streetcomb.cli.SummaryFormat.share;
+
 import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.math.BigDecimal;
@@ -23,13 +23,12 @@ import org.streetcomb.write.FieldCaution;
  */
 final class PlanSummary {
 
-    private static final ObjectMapper MAPPER = new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT);
     static final String CAUTION = FieldCaution.TEXT;
 
     /** Tours listed one per line in the text summary; --json lists all. */
     private static final int TOURS_LISTED = 10;
 
-    private final ObjectNode json = MAPPER.createObjectNode();
+    private final ObjectNode json = SummaryFormat.newObject();
     private final StringBuilder text = new StringBuilder();
 
     private PlanSummary() {
@@ -191,16 +190,10 @@ final class PlanSummary {
     }
 
     private void line(String label, String format, Object... args) {
-        text.append(String.format(Locale.ROOT, "%-9s %s%n", label, String.format(Locale.ROOT, format, args)));
+        SummaryFormat.line(text, label, format, args);
     }
 
-    private static BigDecimal metres(double value) {
-        return BigDecimal.valueOf(value).setScale(3, RoundingMode.HALF_EVEN);
-    }
 
-    private static BigDecimal share(double part, double whole) {
-        return BigDecimal.valueOf(whole == 0 ? 0 : part / whole).setScale(6, RoundingMode.HALF_EVEN);
-    }
 
     /**
      * What a later stage reports: a JSON member, and text lines shown before the caution.
@@ -227,10 +220,6 @@ final class PlanSummary {
     }
 
     String toJson() {
-        try {
-            return MAPPER.writeValueAsString(json) + System.lineSeparator();
-        } catch (JsonProcessingException e) {
-            throw new IllegalStateException(e);
-        }
+        return SummaryFormat.json(json);
     }
 }
