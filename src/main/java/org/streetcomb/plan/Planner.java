@@ -67,6 +67,10 @@ public final class Planner {
         }
         Augmentation augmentation = clock.time("solve", () -> PostmanVariants.solve(problem));
         List<Tour> tours = clock.time("order", () -> TourPlanner.tours(problem, components, augmentation));
+        if (tours.get(0).steps() == 0) {
+            warnings.add("the depot's tour is empty: nothing it can reach and leave again needs servicing; give a "
+                    + "--depot on the main network (the health command lists one-way traps)");
+        }
         return new Plan(request, layer.report(), network, components, depot.node(),
                 request.depot() != null ? depot.distance() : 0, augmentation, tours, List.copyOf(warnings));
     }

@@ -1,5 +1,6 @@
 package org.streetcomb.tour;
 
+import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
 import org.streetcomb.network.Components;
@@ -99,6 +100,13 @@ public final class TourPlanner {
                 throw new IllegalStateException("invalid tour from node " + tour.start() + ": " + problems);
             }
         }
-        return tours;
+        // a part whose streets were all left out (cut off by one-way streets) has nothing to drive
+        List<Tour> driven = new ArrayList<>(tours.size());
+        for (int t = 0; t < tours.size(); t++) {
+            if (t == 0 || tours.get(t).steps() > 0) {
+                driven.add(tours.get(t));
+            }
+        }
+        return driven;
     }
 }

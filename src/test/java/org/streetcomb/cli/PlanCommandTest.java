@@ -113,6 +113,22 @@ class PlanCommandTest {
     }
 
     @Test
+    void partsLeftWithNothingToDriveGetNoTourAndAnEmptyDepotTourIsExplained() throws IOException {
+        // Aguascalientes OSM extract (fixtures/osm, ODbL): its first point lies on a one-way street at the
+        // clipped edge, so leaving out what one-way streets cut off leaves the default depot nothing to do
+        Run run = run("plan", "fixtures/osm/aguascalientes.osm.pbf", "--leave-out-cut-off", "--json", "-q");
+        assertEquals(ExitCode.OK, run.code(), run.err());
+        JsonNode summary = new ObjectMapper().readTree(run.out());
+        JsonNode tours = summary.get("tours");
+        for (int t = 1; t < tours.size(); t++) {
+            assertTrue(tours.get(t).get("steps").asInt() > 0, "tour " + (t + 1) + " drives something");
+        }
+        if (tours.get(0).get("steps").asInt() == 0) {
+            assertTrue(summary.get("warnings").toString().contains("the depot's tour is empty"), summary.toString());
+        }
+    }
+
+    @Test
     void missingFileIsBadInput() {
         Run run = run("plan", dir.resolve("nowhere.geojson").toString());
         assertEquals(ExitCode.BAD_INPUT, run.code());
