@@ -40,6 +40,9 @@ public final class LayerReaders {
         if (name.endsWith(".shp") || name.endsWith(".zip")) {
             return new ShapefileReader(options);
         }
-        throw InputError.at(file, null, "unknown file type: expected .geojson, .json, .shp, a .zip holding a shapefile, .osm, .osm.gz, .osm.bz2 or .osm.pbf");
+        if (name.endsWith(".gpkg")) {
+            return new GeoPackageReader(options);
+        }
+        throw InputError.at(file, null, "unknown file type: expected .geojson, .json, .shp, a .zip holding a shapefile, .gpkg, .osm, .osm.gz, .osm.bz2 or .osm.pbf");
     }
 }

@@ -112,17 +112,7 @@ final class ShapefileReader implements LayerReader {
             tally.skip("line part with fewer than 2 points");
             return;
         }
-        toWgs84.transform(xy, n);
-        Coordinate[] coords = new Coordinate[n];
-        for (int i = 0; i < n; i++) {
-            double lon = xy[2 * i];
-            double lat = xy[2 * i + 1];
-            if (!(lon >= -180 && lon <= 180 && lat >= -90 && lat <= 90)) {
-                throw InputError.at(label, "record " + record + ", point " + (i + 1),
-                        "does not transform to a valid longitude/latitude: is the .prj right for this layer?");
-            }
-            coords[i] = new Coordinate(lon, lat);
-        }
+        Coordinate[] coords = toWgs84.lonLat(xy, n, label, "record " + record);
         lines.add(GEOMETRY.createLineString(coords));
     }
 

@@ -13,6 +13,7 @@ import org.apache.sis.referencing.CRS;
 import org.apache.sis.referencing.CommonCRS;
 import org.apache.sis.referencing.crs.AbstractCRS;
 import org.apache.sis.referencing.cs.AxesConvention;
+import org.locationtech.jts.geom.Coordinate;
 import org.opengis.referencing.crs.CoordinateReferenceSystem;
 import org.opengis.referencing.operation.CoordinateOperation;
 import org.opengis.referencing.operation.MathTransform;
@@ -113,6 +114,25 @@ final class Wgs84Transform {
         } catch (TransformException e) {
             throw new InputError("a coordinate lies outside the domain of the layer's projection: " + firstLine(e));
         }
+    }
+
+    /**
+     * Transforms {@code count} x,y pairs in place and returns them as longitude/latitude coordinates,
+     * refusing a point that lands off the globe (the usual sign of a wrong CRS).
+     */
+    Coordinate[] lonLat(double[] xy, int count, Object file, String place) {
+        transform(xy, count);
+        Coordinate[] coords = new Coordinate[count];
+        for (int i = 0; i < count; i++) {
+            double lon = xy[2 * i];
+            double lat = xy[2 * i + 1];
+            if (!(lon >= -180 && lon <= 180 && lat >= -90 && lat <= 90)) {
+                throw InputError.at(file, place + ", point " + (i + 1),
+                        "does not transform to a valid longitude/latitude: is the layer's coordinate reference system right?");
+            }
+            coords[i] = new Coordinate(lon, lat);
+        }
+        return coords;
     }
 
     /** The source CRS and the accuracy of the datum shift, for the read report. */

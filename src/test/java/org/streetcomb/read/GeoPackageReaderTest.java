@@ -1,0 +1,64 @@
+package org.streetcomb.read;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.stream.Collectors;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+import org.streetcomb.network.GeodesicLength;
+
+/**
+ * The Mesa streets as a GeoPackage (written by GDAL's ogr2ogr from the shapefile fixture, see NOTICE)
+ * against GDAL's ogrinfo, the independent reader: feature count and total geodesic length in WGS 84
+ * (SpatiaLite's ST_Length on the ellipsoid, through GDAL's SQLite dialect); and against the shapefile
+ * reader on the same data. The CRS comes from the file's gpkg_spatial_ref_sys, not from --crs.
+ */
+class GeoPackageReaderTest {
+
+    private static final Path MESA = Path.of("fixtures/geopackage/mesa.gpkg");
+
+    @TempDir
+    Path dir;
+
+    @Test
+    void matchesGdalAndTheShapefile() {
+        RoadLayer layer = LayerReaders.read(MESA);
+        String gdal = Gdal.ogrinfo("-dialect", "SQLite", "-sql", "SELECT COUNT(*) AS n, "
+                + "SUM(ST_Length(ST_Transform(geom, 4326), 1)) AS metres FROM streets", MESA.toString());
+
+        assertEquals((int) Gdal.number(gdal, "n"), layer.report().featuresRead());
+        double metres = length(layer);
+        // datum shifts differ slightly between PROJ and SIS; lengths agree far closer than 1 in 10,000
+        assertEquals(Gdal.number(gdal, "metres"), metres, 1e-4 * metres);
+
+        RoadLayer shapefile = LayerReaders.read(Path.of("fixtures/shapefiles/mesa-az-stateplane-ft/streets.shp"),
+                ReadOptions.DEFAULTS.withCrs("EPSG:2223"));
+        assertEquals(shapefile.features().size(), layer.features().size());
+        assertEquals(length(shapefile), metres, 1e-6 * metres);
+        assertEquals(shapefile.features().get(0).properties().keySet(),
+                layer.features().get(0).properties().keySet().stream().filter(k -> !k.equals("fid"))
+                        .collect(Collectors.toSet()));
+    }
+
+    @Test
+    void refusesAFileThatIsNotAGeoPackage() throws IOException {
+        Path fake = dir.resolve("roads.gpkg");
+        Files.writeString(fake, "not a database\n".repeat(200));
+        Refusals.assertRefused(dir, fake, "roads.gpkg: not a GeoPackage");
+    }
+
+    private static double length(RoadLayer layer) {
+        double sum = 0;
+        for (RoadFeature f : layer.features()) {
+            var c = f.line().getCoordinates();
+            for (int i = 1; i < c.length; i++) {
+                sum += GeodesicLength.between(c[i - 1].x, c[i - 1].y, c[i].x, c[i].y);
+            }
+        }
+        return sum;
+    }
+}
