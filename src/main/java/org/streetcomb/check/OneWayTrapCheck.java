@@ -9,6 +9,8 @@ import java.util.stream.Stream;
 import org.streetcomb.NoTourError;
 import org.streetcomb.network.Components;
 import org.streetcomb.network.StreetNetwork;
+import org.streetcomb.network.StrongComponents;
+import org.streetcomb.network.TravelArcs;
 
 /**
  * Finds groups of streets that one-way restrictions turn into traps. Within each connected part of the

@@ -67,7 +67,7 @@ public final class AuditCommand implements Callable<Integer> {
 
     @Option(names = "--depot", paramLabel = "LON,LAT", converter = LonLatConverter.class,
             description = "Where the mop-up tour ends (and starts, without --start), as longitude,latitude. "
-                    + "Default: the first point of the first road line, as planning does.")
+                    + "Default: as planning does, a node of the largest strongly connected set of streets.")
     LonLat depot;
 
     @Option(names = "--start", paramLabel = "LON,LAT", converter = LonLatConverter.class,

@@ -12,7 +12,8 @@ final class DepotOptions {
 
     @Option(names = "--depot", paramLabel = "LON,LAT", converter = LonLatConverter.class,
             description = "The depot, as longitude,latitude in degrees (WGS84); streets are checked for a legal "
-                    + "route from and back to it. Default: the first point of the first road line, as planning does.")
+                    + "route from and back to it. Default: as planning does, a node of the largest strongly connected set "
+                    + "of streets.")
     LonLat position;
 
     @Option(names = "--depot-reach", paramLabel = "METRES", defaultValue = "500",

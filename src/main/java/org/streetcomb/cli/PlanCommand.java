@@ -33,7 +33,8 @@ public final class PlanCommand implements Callable<Integer> {
 
     @Option(names = "--depot", paramLabel = "LON,LAT", converter = LonLatConverter.class,
             description = "Where tours start and end, as longitude,latitude in degrees (WGS84). "
-                    + "Default: the first point of the first road line in the layer.")
+                    + "Default: the node nearest the layer's first point among the largest set of streets that can "
+                    + "all reach each other.")
     LonLat depot;
 
     @Option(names = {"-o", "--out"}, paramLabel = "FILE", description = "Write the tours as a GeoJSON FeatureCollection.")

@@ -113,7 +113,7 @@ final class PlanSummary {
                 network.edgeCount(), network.nodeCount(), plan.augmentation().oddNodes(), plan.components().count(),
                 plan.components().count() == 1 ? "" : "s");
         line("Depot", "node %d at %.7f,%.7f%s", plan.depot(), network.lon(plan.depot()), network.lat(plan.depot()),
-                plan.request().depot() == null ? " (default: first point of the layer)"
+                plan.request().depot() == null ? " (default: main network, nearest the layer's first point)"
                         : String.format(Locale.ROOT, ", %.1f m from the given position", plan.depotDistance()));
         line("Method", "%s%s", plan.augmentation().method(), plan.augmentation().certified() ? "" : " [optimality not proved]");
         double tour = plan.tourLength();

@@ -6,14 +6,20 @@ import java.util.Locale;
 import org.streetcomb.InputError;
 import org.streetcomb.read.RoadFeature;
 
-/** Puts the depot on the network node nearest the requested position, refusing one too far away. */
+/**
+ * Puts the depot on the network node nearest the requested position, refusing one too far away. Without a
+ * requested position, the depot is the node nearest the layer's first point among the nodes of the
+ * largest set of streets that can all reach each other (the largest strongly connected component, by
+ * street length): a layer's first line is often a stray piece or, in an OpenStreetMap extract, a one-way
+ * street cut at the edge, and a depot there could serve almost nothing.
+ */
 public final class DepotPlacement {
 
     private DepotPlacement() {
     }
 
     /**
-     * @param requested   the depot position, or null for the first point of the first road line
+     * @param requested   the depot position, or null for the default described above
      * @param maxDistance metres the nearest node may lie from the requested position
      * @param file        the layer, named in the error
      * @return the depot node and its distance from the requested position, or null for a network without edges
@@ -21,7 +27,10 @@ public final class DepotPlacement {
      */
     public static NearestNode.Hit place(StreetNetwork network, List<RoadFeature> features, LonLat requested,
                                         double maxDistance, Path file) {
-        LonLat position = requested != null ? requested : firstPoint(features.get(0));
+        if (requested == null) {
+            return insideLargestStrongComponent(network, firstPoint(features.get(0)));
+        }
+        LonLat position = requested;
         NearestNode.Hit depot = NearestNode.of(network, position.lon(), position.lat());
         if (depot != null && depot.distance() > maxDistance) {
             throw new InputError(String.format(Locale.ROOT,
@@ -30,6 +39,25 @@ public final class DepotPlacement {
                     file.getFileName(), maxDistance));
         }
         return depot;
+    }
+
+    private static NearestNode.Hit insideLargestStrongComponent(StreetNetwork network, LonLat near) {
+        StrongComponents strong = StrongComponents.of(network, new TravelArcs(network));
+        double[] length = new double[strong.count()];
+        for (int e = 0; e < network.edgeCount(); e++) {
+            int c = strong.of(network.from(e));
+            if (c >= 0 && c == strong.of(network.to(e))) {
+                length[c] += network.length(e);
+            }
+        }
+        int largest = 0;
+        for (int c = 1; c < length.length; c++) {
+            if (length[c] > length[largest]) {
+                largest = c;
+            }
+        }
+        final int chosen = largest;
+        return NearestNode.of(network, near.lon(), near.lat(), v -> strong.of(v) == chosen);
     }
 
     private static LonLat firstPoint(RoadFeature feature) {

@@ -22,6 +22,8 @@ import org.locationtech.jts.geom.GeometryFactory;
 import org.streetcomb.network.Heading;
 import org.streetcomb.network.NetworkBuilder;
 import org.streetcomb.network.StreetNetwork;
+import org.streetcomb.network.StrongComponents;
+import org.streetcomb.network.TravelArcs;
 import org.streetcomb.read.RoadFeature;
 import org.streetcomb.read.RoadLayer;
 import org.streetcomb.read.Travel;

@@ -1,6 +1,5 @@
-package org.streetcomb.check;
+package org.streetcomb.network;
 
-import org.streetcomb.network.StreetNetwork;
 import org.streetcomb.read.Travel;
 
 /**
@@ -8,7 +7,7 @@ import org.streetcomb.read.Travel;
  * runs along edge {@code e} in its digitised direction (from → to) and arc {@code 2e + 1} against it; an
  * arc exists only where the edge's travel permits it, so a two-way street gives both.
  */
-final class TravelArcs {
+public final class TravelArcs {
 
     private final StreetNetwork network;
     private final int[] outStart;
@@ -16,7 +15,7 @@ final class TravelArcs {
     private final int[] inStart;
     private final int[] inArcs;
 
-    TravelArcs(StreetNetwork network) {
+    public TravelArcs(StreetNetwork network) {
         this.network = network;
         int n = network.nodeCount();
         outStart = new int[n + 1];
@@ -45,40 +44,40 @@ final class TravelArcs {
         }
     }
 
-    boolean allowed(int arc) {
+    public boolean allowed(int arc) {
         Travel travel = network.travel(arc >> 1);
         return (arc & 1) == 0 ? travel != Travel.BACKWARD : travel != Travel.FORWARD;
     }
 
-    int tail(int arc) {
+    public int tail(int arc) {
         return (arc & 1) == 0 ? network.from(arc >> 1) : network.to(arc >> 1);
     }
 
-    int head(int arc) {
+    public int head(int arc) {
         return (arc & 1) == 0 ? network.to(arc >> 1) : network.from(arc >> 1);
     }
 
-    int outStart(int node) {
+    public int outStart(int node) {
         return outStart[node];
     }
 
-    int outEnd(int node) {
+    public int outEnd(int node) {
         return outStart[node + 1];
     }
 
-    int outArc(int i) {
+    public int outArc(int i) {
         return outArcs[i];
     }
 
-    int inStart(int node) {
+    public int inStart(int node) {
         return inStart[node];
     }
 
-    int inEnd(int node) {
+    public int inEnd(int node) {
         return inStart[node + 1];
     }
 
-    int inArc(int i) {
+    public int inArc(int i) {
         return inArcs[i];
     }
 }

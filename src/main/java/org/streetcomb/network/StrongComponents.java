@@ -1,7 +1,6 @@
-package org.streetcomb.check;
+package org.streetcomb.network;
 
 import java.util.Arrays;
-import org.streetcomb.network.StreetNetwork;
 
 /**
  * Strongly connected components of the drivable arcs, by Tarjan's algorithm (R. Tarjan, "Depth-first
@@ -10,7 +9,7 @@ import org.streetcomb.network.StreetNetwork;
  * boxed objects, and the recursion would overflow the call stack on long one-way chains.
  * Nodes without edges belong to no component (-1).
  */
-final class StrongComponents {
+public final class StrongComponents {
 
     private final int[] componentOfNode;
     private final int count;
@@ -20,7 +19,7 @@ final class StrongComponents {
         this.count = count;
     }
 
-    static StrongComponents of(StreetNetwork network, TravelArcs arcs) {
+    public static StrongComponents of(StreetNetwork network, TravelArcs arcs) {
         int n = network.nodeCount();
         int[] component = new int[n];
         int[] index = new int[n];
@@ -78,12 +77,12 @@ final class StrongComponents {
         return new StrongComponents(component, count);
     }
 
-    int count() {
+    public int count() {
         return count;
     }
 
     /** The component of {@code node}, or -1 for a node without edges. */
-    int of(int node) {
+    public int of(int node) {
         return componentOfNode[node];
     }
 }
