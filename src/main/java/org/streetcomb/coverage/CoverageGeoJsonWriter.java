@@ -12,6 +12,7 @@ import org.locationtech.jts.geom.Coordinate;
 import org.streetcomb.network.StreetNetwork;
 import org.streetcomb.read.RoadFeature;
 import org.streetcomb.write.AtomicFile;
+import org.streetcomb.write.GeoJsonPositions;
 
 /**
  * Writes coverage as GeoJSON FeatureCollections (RFC 7946, no {@code crs} member, longitude/latitude with
@@ -99,22 +100,14 @@ public final class CoverageGeoJsonWriter {
         json.writeObjectFieldStart("geometry");
         json.writeStringField("type", "LineString");
         json.writeArrayFieldStart("coordinates");
-        BigDecimal lastLon = null, lastLat = null;
-        int written = 0;
+        GeoJsonPositions positions = new GeoJsonPositions(json);
         for (int i = 0; i < lonLat.length; i += 2) {
-            BigDecimal x = round(lonLat[i], 7).stripTrailingZeros();
-            BigDecimal y = round(lonLat[i + 1], 7).stripTrailingZeros();
-            // a repeated position would make a degenerate segment; keep one, but always keep two positions
-            if (x.equals(lastLon) && y.equals(lastLat) && !(i == lonLat.length - 2 && written == 1)) {
-                continue;
+            // a repeated position is left out, but a line always keeps two positions
+            if (i == lonLat.length - 2 && positions.written() == 1) {
+                positions.addAlways(lonLat[i], lonLat[i + 1]);
+            } else {
+                positions.add(lonLat[i], lonLat[i + 1]);
             }
-            json.writeStartArray();
-            json.writeNumber(x);
-            json.writeNumber(y);
-            json.writeEndArray();
-            lastLon = x;
-            lastLat = y;
-            written++;
         }
         json.writeEndArray();
         json.writeEndObject();

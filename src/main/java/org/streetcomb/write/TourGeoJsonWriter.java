@@ -63,9 +63,9 @@ public final class TourGeoJsonWriter {
         json.writeObjectFieldStart("geometry");
         json.writeStringField("type", "LineString");
         json.writeArrayFieldStart("coordinates");
-        PointWriter points = new PointWriter(json);
+        GeoJsonPositions points = new GeoJsonPositions(json);
         for (int i = 0; i < tour.steps(); i++) {
-            points.edge(network, tour.edges()[i], tour.forward()[i]);
+            edge(points, network, tour.edges()[i], tour.forward()[i]);
         }
         json.writeEndArray();
         json.writeEndObject();
@@ -88,7 +88,7 @@ public final class TourGeoJsonWriter {
             json.writeObjectFieldStart("geometry");
             json.writeStringField("type", "LineString");
             json.writeArrayFieldStart("coordinates");
-            new PointWriter(json).edge(network, e, tour.forward()[i]);
+            edge(new GeoJsonPositions(json), network, e, tour.forward()[i]);
             json.writeEndArray();
             json.writeEndObject();
             json.writeEndObject();
@@ -99,40 +99,12 @@ public final class TourGeoJsonWriter {
         return BigDecimal.valueOf(value).setScale(3, RoundingMode.HALF_EVEN);
     }
 
-    /** Writes positions rounded to 7 decimals, skipping a point equal to the one before it. */
-    private static final class PointWriter {
-        private final JsonGenerator json;
-        private BigDecimal lastLon;
-        private BigDecimal lastLat;
-
-        PointWriter(JsonGenerator json) {
-            this.json = json;
-        }
-
-        void edge(StreetNetwork network, int e, boolean forward) throws IOException {
-            int count = network.pointCount(e);
-            for (int k = 0; k < count; k++) {
-                int i = forward ? k : count - 1 - k;
-                point(network.pointLon(e, i), network.pointLat(e, i));
-            }
-        }
-
-        private void point(double lon, double lat) throws IOException {
-            BigDecimal x = degrees(lon);
-            BigDecimal y = degrees(lat);
-            if (x.equals(lastLon) && y.equals(lastLat)) {
-                return;
-            }
-            json.writeStartArray();
-            json.writeNumber(x);
-            json.writeNumber(y);
-            json.writeEndArray();
-            lastLon = x;
-            lastLat = y;
-        }
-
-        private static BigDecimal degrees(double value) {
-            return BigDecimal.valueOf(value).setScale(7, RoundingMode.HALF_EVEN).stripTrailingZeros();
+    /** Writes an edge's polyline in the direction driven. */
+    private static void edge(GeoJsonPositions points, StreetNetwork network, int e, boolean forward) throws IOException {
+        int count = network.pointCount(e);
+        for (int k = 0; k < count; k++) {
+            int i = forward ? k : count - 1 - k;
+            points.add(network.pointLon(e, i), network.pointLat(e, i));
         }
     }
 }
