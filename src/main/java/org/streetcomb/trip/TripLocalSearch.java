@@ -223,8 +223,12 @@ final class TripLocalSearch {
         }
     }
 
-    /** Cost, service length and demand of a trip. */
     private double[] totals(int[] trip) {
+        return totals(tasks, distances, depot, trip);
+    }
+
+    /** Cost, service length and demand of a trip from and back to the depot. */
+    static double[] totals(Tasks tasks, Distances distances, int depot, int[] trip) {
         double cost = 0;
         double service = 0;
         double demand = 0;

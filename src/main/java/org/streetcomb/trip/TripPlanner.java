@@ -108,19 +108,8 @@ public final class TripPlanner {
     private double longest(Tasks tasks, Distances distances, List<int[]> trips) {
         double longest = 0;
         for (int[] trip : trips) {
-            TripExtension walk = new TripExtension(tasks, distances, depot);
-            double cost = 0;
-            double service = 0;
-            double demand = 0;
-            int at = depot;
-            for (int ref : trip) {
-                cost += distances.between(at, tasks.start(ref)) + tasks.cost(ref);
-                service += tasks.cost(ref);
-                demand += tasks.demand(ref);
-                at = tasks.end(ref);
-            }
-            cost += distances.between(at, depot);
-            longest = Math.max(longest, settings.limit().use(service, cost - service, demand));
+            double[] t = TripLocalSearch.totals(tasks, distances, depot, trip);
+            longest = Math.max(longest, settings.limit().use(t[1], t[0] - t[1], t[2]));
         }
         return longest;
     }
