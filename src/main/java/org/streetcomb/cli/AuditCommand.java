@@ -2,6 +2,7 @@ package org.streetcomb.cli;
 
 import java.io.PrintWriter;
 import java.nio.file.Path;
+import java.util.ArrayList;
 import java.util.List;
 import java.util.concurrent.Callable;
 import org.streetcomb.ExitCode;
@@ -19,6 +20,11 @@ import org.streetcomb.network.StreetNetwork;
 import org.streetcomb.plan.Plan;
 import org.streetcomb.plan.PlanRequest;
 import org.streetcomb.plan.StageClock;
+import org.streetcomb.report.CoverageLayers;
+import org.streetcomb.report.MapGroup;
+import org.streetcomb.report.MapLayer;
+import org.streetcomb.report.PlanLayers;
+import org.streetcomb.report.TrackLines;
 import org.streetcomb.write.TourGeoJsonWriter;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
@@ -32,10 +38,19 @@ import picocli.CommandLine.Parameters;
         description = {
             "Matches recorded GPS tracks (GPX) to the streets of the layer and reports, per street, the share of its "
                 + "length that was driven (for one-way streets, in the permitted direction). Prints a summary; writes "
-                + "the streets with their status and the missed parts as GeoJSON.",
+                + "the streets with their status and the missed parts as GeoJSON, and with --report and --quicklook "
+                + "a map of them.",
             "",
             "GPS tracks wander and maps age: check doubtful streets on the ground before reporting them."})
 public final class AuditCommand implements Callable<Integer> {
+
+    static final String TRACK_CAUTION = "Coverage is inferred from GPS tracks, which wander and drop out: check "
+            + "doubtful streets on the ground before reporting them covered or missed.";
+    /** The report's cautions when no tour is planned: checking streets on the ground is driving too. */
+    static final List<String> CHECK_CAUTIONS = List.of(
+            "Map data may be out of date: streets close, one-way rules change and new streets appear.",
+            "When you check streets on the ground, obey traffic law and road signs, and never handle a phone, "
+                    + "tablet or GPS unit while driving.");
 
     @Parameters(index = "0", paramLabel = "LAYER", description = "Road centrelines (the same layer the tour was planned on).")
     Path layerFile;
@@ -112,8 +127,14 @@ public final class AuditCommand implements Callable<Integer> {
     @CommandLine.Mixin
     FieldOutputOptions field;
 
+    @CommandLine.Mixin
+    ReportOptions report;
+
     @CommandLine.Spec
     CommandLine.Model.CommandSpec spec;
+
+    /** The mop-up tour once planned, for the report's map. */
+    private Plan mopUpPlan;
 
     @Override
     public Integer call() {
@@ -129,10 +150,12 @@ public final class AuditCommand implements Callable<Integer> {
             throw new CommandLine.ParameterException(spec.commandLine(), "--depot-reach must be 0 or more metres");
         }
         field.check(spec.commandLine());
+        report.validate();
         MatchSettings settings = new MatchSettings(sigma, radius, beta, maxGap, maxSpeed / 3.6);
         StageClock clock = new StageClock(TerminalProgress.forCommandLine(quiet, System.err));
+        TrackLines seen = new TrackLines();
         Audit audit = DriveAudit.run(new AuditRequest(layerFile, tracks, layer.snap(), settings, coveredAt, bothKerbs,
-                layer.readOptions()), clock);
+                layer.readOptions()), clock, report.requested() ? seen : segment -> { });
         if (streetsOut != null) {
             clock.run("write streets", () -> CoverageGeoJsonWriter.writeStreets(streetsOut, audit.coverage()));
         }
@@ -147,10 +170,31 @@ public final class AuditCommand implements Callable<Integer> {
         if (mopUp != null) {
             summary.add(mopUp);
         }
+        if (report.requested()) {
+            summary.add(report.section());
+            writeReport(audit, seen, summary, clock);
+        }
         PrintWriter stdout = spec.commandLine().getOut();
         stdout.print(json ? summary.toJson() : summary.toText());
         stdout.flush();
         return ExitCode.OK;
+    }
+
+    /** The map of covered and missed streets, with the mop-up tour drawn as plan draws a tour. */
+    private void writeReport(Audit audit, TrackLines seen, AuditSummary summary, StageClock clock) {
+        List<MapLayer> layers = new ArrayList<>(CoverageLayers.of(audit.coverage(), seen));
+        List<MapGroup> groups = List.of();
+        List<String> cautions = new ArrayList<>(List.of(TRACK_CAUTION));
+        if (mopUpPlan != null) {
+            layers.addAll(PlanLayers.tourLayers(mopUpPlan));
+            groups = PlanLayers.groups(mopUpPlan);
+            cautions.addAll(ReportOptions.CAUTIONS);
+        } else {
+            cautions.addAll(CHECK_CAUTIONS);
+        }
+        String drive = tracks.size() == 1 ? tracks.get(0).getFileName().toString() : tracks.size() + " GPX files";
+        report.write("Coverage: " + drive + " on " + layerFile.getFileName(), layers, groups, summary.json(), cautions,
+                clock);
     }
 
     private boolean mopUpRequested() {
@@ -171,6 +215,7 @@ public final class AuditCommand implements Callable<Integer> {
         Plan plan = field.arrange(new Plan(new PlanRequest(layerFile, depot, layer.snap(), depotReach, false,
                 layer.readOptions()), audit.read(), network, Components.of(network), depotHit.node(),
                 depot == null ? 0 : depotHit.distance(), planned.augmentation(), planned.tours(), List.of()), clock);
+        mopUpPlan = plan;
         if (mopUpOut != null) {
             clock.run("write mop-up", () -> new TourGeoJsonWriter(false).write(mopUpOut, network, plan.tours()));
         }

@@ -199,7 +199,10 @@ final class AuditSummary {
         SummaryFormat.line(text, label, format, args);
     }
 
-
+    /** The summary as a JSON tree, the one {@link #toJson} prints. */
+    ObjectNode json() {
+        return json;
+    }
 
     String toText() {
         return text + String.format(Locale.ROOT, "%-9s %s%n", "Caution", CAUTION);

@@ -118,12 +118,18 @@ final class ReportOptions {
         return new PlanSummary.Section("report", json, lines);
     }
 
-    /** Writes the report files asked for; does nothing when none is. */
+    /** Writes the report files asked for, with the planning cautions; does nothing when none is. */
     void write(String title, List<MapLayer> layers, List<MapGroup> groups, JsonNode summary, StageClock clock) {
+        write(title, layers, groups, summary, CAUTIONS, clock);
+    }
+
+    /** Writes the report files asked for, with the given cautions; does nothing when none is. */
+    void write(String title, List<MapLayer> layers, List<MapGroup> groups, JsonNode summary, List<String> cautions,
+               StageClock clock) {
         if (!requested()) {
             return;
         }
-        MapReport report = new MapReport(title, layers, groups, summary, run(), CAUTIONS,
+        MapReport report = new MapReport(title, layers, groups, summary, run(), cautions,
                 basemap == null ? null : new MapReport.Basemap(basemap, basemapCredit), displayTolerance);
         clock.run("report", () -> {
             if (html != null) {

@@ -4,6 +4,7 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
+import java.util.function.Consumer;
 import org.streetcomb.InputError;
 import org.streetcomb.network.NetworkBuilder;
 import org.streetcomb.network.StreetNetwork;
@@ -26,6 +27,11 @@ public final class DriveAudit {
     }
 
     public static Audit run(AuditRequest request, StageClock clock) {
+        return run(request, clock, segment -> { });
+    }
+
+    /** As {@link #run(AuditRequest, StageClock)}, also handing every track segment read to {@code seen} (for a map). */
+    public static Audit run(AuditRequest request, StageClock clock, Consumer<TrackSegment> seen) {
         RoadLayer layer = clock.time("read", () -> LayerReaders.read(request.layer(), request.readOptions()));
         StreetNetwork network = clock.time("network",
                 () -> new NetworkBuilder(request.snapTolerance()).build(layer));
@@ -42,6 +48,7 @@ public final class DriveAudit {
                 int offBefore = tally.offNetwork;
                 GpxContents contents = new GpxTrackReader().read(file, segment -> {
                     extent.add(segment);
+                    seen.accept(segment);
                     coverage.accept(segment);
                 });
                 results.add(new TrackFileResult(file, contents, tally.matched - matchedBefore, tally.offNetwork - offBefore));

@@ -9,13 +9,13 @@ import org.streetcomb.network.StreetNetwork;
  * longitude/latitude pairs. Offsets are located by geodesic length along the polyline and interpolated
  * linearly within a segment, which over a street segment of a few hundred metres is exact to millimetres.
  */
-final class EdgeSlice {
+public final class EdgeSlice {
 
     private EdgeSlice() {
     }
 
     /** Points from offset {@code from} to offset {@code to}; reversed when {@code reverse} is set. */
-    static double[] of(StreetNetwork network, int edge, double from, double to, boolean reverse) {
+    public static double[] of(StreetNetwork network, int edge, double from, double to, boolean reverse) {
         int n = network.pointCount(edge);
         double[] out = new double[2 * (n + 2)];
         int size = 0;

@@ -43,6 +43,7 @@ public final class StreetCoverageAccounting {
         boolean[] hasEdges = new boolean[k];
         double[] edgeShare = new double[network.edgeCount()];
         List<MissedPart> missed = new ArrayList<>();
+        List<WrongWayPart> wrongWay = new ArrayList<>();
         for (int e = 0; e < network.edgeCount(); e++) {
             int f = indexOf.get(network.feature(e));
             hasEdges[f] = true;
@@ -67,7 +68,11 @@ public final class StreetCoverageAccounting {
                 boolean forward = travel == Travel.FORWARD;
                 need = len;
                 got = total(forward ? along : against);
-                wrong[f] += total(forward ? against : along);
+                double[] wrongIntervals = forward ? against : along;
+                wrong[f] += total(wrongIntervals);
+                for (int i = 0; i < wrongIntervals.length; i += 2) {
+                    wrongWay.add(new WrongWayPart(e, wrongIntervals[i], wrongIntervals[i + 1], !forward));
+                }
                 gaps(e, len, forward ? along : against, forward ? MissedPart.Way.ALONG : MissedPart.Way.AGAINST, parts);
             }
             length[f] += len;
@@ -95,7 +100,8 @@ public final class StreetCoverageAccounting {
             CoverageStatus s = status[indexOf.get(network.feature(e))];
             mopUp[e] = network.required(e) && s != CoverageStatus.COVERED && edgeShare[e] < threshold;
         }
-        return new CoverageReport(network, List.copyOf(streets), List.copyOf(missed), mopUp, threshold, bothKerbs);
+        return new CoverageReport(network, List.copyOf(streets), List.copyOf(missed), List.copyOf(wrongWay), mopUp,
+                threshold, bothKerbs);
     }
 
     /** Union of two sorted lists of disjoint intervals. */

@@ -37,6 +37,9 @@ public final class GpxTrackReader {
     /** Fixes per window handed on; a segment longer than this arrives in several overlapping windows. */
     public static final int DEFAULT_WINDOW = 20_000;
 
+    /** Longest track name kept in a segment's place. */
+    private static final int NAME_LENGTH = 80;
+
     private final int window;
 
     public GpxTrackReader() {
@@ -92,6 +95,12 @@ public final class GpxTrackReader {
         return trimmed.lines().findFirst().orElse("").trim();
     }
 
+    /** A track's name on one line, at most {@value #NAME_LENGTH} characters, for messages and maps. */
+    private static String shortened(String name) {
+        String line = name.strip().replaceAll("\\s+", " ");
+        return line.length() <= NAME_LENGTH ? line : line.substring(0, NAME_LENGTH - 1) + "\u2026";
+    }
+
     /** The state of one pass over a file. */
     private final class Stream {
         private final Path file;
@@ -108,6 +117,10 @@ public final class GpxTrackReader {
         private double[] time = new double[256];
         private int size;
         private boolean inSegment;
+        /** Element depth now, and of the open {@code trk} (-1 outside one), to tell its own {@code name}. */
+        private int depth;
+        private int trackDepth = -1;
+        private String trackName = "";
 
         Stream(Path file, Consumer<TrackSegment> sink) {
             this.file = file;
@@ -133,23 +146,43 @@ public final class GpxTrackReader {
                                 "root element is <" + name + ">: expected a GPX document (<gpx>)");
                     }
                     root = false;
+                    depth++;
                     switch (name) {
-                        case "trk" -> tracks++;
+                        case "trk" -> {
+                            tracks++;
+                            trackDepth = depth;
+                            trackName = "";
+                        }
+                        case "name" -> {
+                            if (depth == trackDepth + 1) {
+                                trackName = shortened(xml.getElementText());
+                                depth--;
+                            }
+                        }
                         case "trkseg" -> {
                             segments++;
                             windows = 0;
                             size = 0;
                             inSegment = true;
                         }
-                        case "trkpt" -> point(xml);
+                        case "trkpt" -> {
+                            point(xml);
+                            depth--;
+                        }
                         case "wpt" -> waypoints++;
                         case "rtept" -> routePoints++;
                         default -> {
                         }
                     }
-                } else if (event == XMLStreamConstants.END_ELEMENT && xml.getLocalName().equals("trkseg")) {
-                    flush(false);
-                    inSegment = false;
+                } else if (event == XMLStreamConstants.END_ELEMENT) {
+                    depth--;
+                    if (xml.getLocalName().equals("trkseg")) {
+                        flush(false);
+                        inSegment = false;
+                    } else if (xml.getLocalName().equals("trk")) {
+                        trackDepth = -1;
+                        trackName = "";
+                    }
                 }
             }
             if (root) {
@@ -235,7 +268,8 @@ public final class GpxTrackReader {
         private void flush(boolean split) {
             if (size > 0 && (split || windows == 0 || size > 1)) {
                 windows++;
-                String place = "track " + tracks + ", segment " + segments + (split || windows > 1 ? ", part " + windows : "");
+                String place = "track " + tracks + (trackName.isEmpty() ? "" : " (" + trackName + ")") + ", segment "
+                        + segments + (split || windows > 1 ? ", part " + windows : "");
                 sink.accept(new TrackSegment(file, place, Arrays.copyOf(lon, size), Arrays.copyOf(lat, size),
                         Arrays.copyOf(time, size)));
             }

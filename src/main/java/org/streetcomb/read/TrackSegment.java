@@ -8,7 +8,8 @@ import java.nio.file.Path;
  * a fix without a time.
  *
  * @param file   the GPX file it came from
- * @param place  where in the file, for messages ("track 1, segment 2")
+ * @param place  where in the file, for messages and maps ("track 1 (Monday round), segment 2"); the track's name
+ *               is text from the file, so whoever shows it must escape it
  * @param lon    longitudes
  * @param lat    latitudes
  * @param time   times in seconds, NaN where the fix has none

@@ -45,6 +45,14 @@ public final class PlanLayers {
     }
 
     public static List<MapLayer> of(Plan plan) {
+        List<MapLayer> layers = new ArrayList<>();
+        layers.add(NetworkLayer.of(plan.network()));
+        layers.addAll(tourLayers(plan));
+        return layers;
+    }
+
+    /** The layers of the tours alone, without the street network: for a map that draws the streets its own way. */
+    public static List<MapLayer> tourLayers(Plan plan) {
         return new PlanLayers(plan).layers();
     }
 
@@ -96,7 +104,6 @@ public final class PlanLayers {
             }
         }
         List<MapLayer> layers = new ArrayList<>();
-        layers.add(NetworkLayer.of(network));
         layers.add(new MapLayer("service", "Service passes", "streets driven to service them, in the colour of their " + noun.toLowerCase(Locale.ROOT),
                 MapLayer.Kind.LINES, MapStyle.solid(TOUR_COLOURS[0], 4, 0.85), true, service));
         layers.add(new MapLayer("deadhead", "Deadhead passes", "streets driven again without servicing",

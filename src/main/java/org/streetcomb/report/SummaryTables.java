@@ -12,7 +12,8 @@ import java.util.Set;
 /**
  * Draws a command's JSON summary as HTML tables, whatever fields it has, so the report shows exactly the
  * numbers the command prints with {@code --json}: scalars at the top level form the first table, each
- * object its own table (nested objects flattened), an array of objects a table with one row per element,
+ * object its own table (nested objects flattened), an array of objects a table with one row per element
+ * (inside an object too, drawn after the object's table),
  * and an array of text a list. Every value cell carries its JSON path in {@code data-key} (for example
  * {@code totals.tour_m} or {@code tours.0.length_m}) and the value exactly as JSON writes it.
  */
@@ -53,9 +54,14 @@ final class SummaryTables {
             }
             html.append("<h3>").append(HtmlText.escape(label(field.getKey()))).append("</h3>");
             if (value.isObject()) {
+                List<Nested> nested = new ArrayList<>();
                 html.append("<table class=\"facts\">");
-                objectRows("", field.getKey(), value);
+                objectRows("", field.getKey(), value, nested);
                 html.append("</table>");
+                for (Nested table : nested) {
+                    html.append("<h3>").append(HtmlText.escape(table.label)).append("</h3>");
+                    arrayTable(table.path, table.array);
+                }
             } else if (isTable(value)) {
                 arrayTable(field.getKey(), value);
             } else {
@@ -64,7 +70,8 @@ final class SummaryTables {
         }
     }
 
-    private void objectRows(String labelPrefix, String path, JsonNode object) {
+    /** Adds the rows of an object; its arrays of objects go to {@code nested}, to be drawn as tables after it. */
+    private void objectRows(String labelPrefix, String path, JsonNode object, List<Nested> nested) {
         if (object.isEmpty()) {
             row(labelPrefix.isEmpty() ? "(none)" : labelPrefix, path, object);
             return;
@@ -74,7 +81,9 @@ final class SummaryTables {
             String label = labelPrefix.isEmpty() ? label(field.getKey()) : labelPrefix + " / " + label(field.getKey());
             String key = path + "." + field.getKey();
             if (field.getValue().isObject()) {
-                objectRows(label, key, field.getValue());
+                objectRows(label, key, field.getValue(), nested);
+            } else if (field.getValue().isArray() && isTable(field.getValue())) {
+                nested.add(new Nested(label(path.split("\\.")[0]) + " / " + label, key, field.getValue()));
             } else {
                 row(label, key, field.getValue());
             }
@@ -149,6 +158,10 @@ final class SummaryTables {
     /** The value as JSON writes it; text without quotes; a nested value as compact JSON. */
     private static String text(JsonNode value) {
         return value.isValueNode() ? value.asText() : value.toString();
+    }
+
+    /** An array of objects inside an object, drawn as its own table. */
+    private record Nested(String label, String path, JsonNode array) {
     }
 
     /** "deadhead_share" becomes "deadhead share", "tour_m" becomes "tour (m)". */

@@ -10,7 +10,6 @@ import java.io.PrintWriter;
 import java.net.InetAddress;
 import java.net.ServerSocket;
 import java.io.StringWriter;
-import java.math.BigDecimal;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -66,7 +65,7 @@ class HtmlReportBrowserTest {
         assertTrue(counts.get("onMap").asInt() >= 5, "the layers shown at start are on the map: " + counts);
         assertTrue(counts.get("canvases").asInt() >= 5, "each line layer draws on its own canvas: " + counts);
 
-        JsonNode cells = assertTableShows(printed);
+        JsonNode cells = SummaryCells.assertTableShows(chromium, printed);
         for (String key : List.of("totals.tour_m", "totals.deadhead_m", "totals.deadhead_share", "network.length_m",
                 "network.odd_nodes", "tours.0.length_m", "method")) {
             assertTrue(cells.toString().contains("[\"" + key + "\""), "the table shows " + key);
@@ -174,25 +173,8 @@ class HtmlReportBrowserTest {
         JsonNode drawn = chromium.eval("window.streetcombReport.buckets.filter(b => b.layer.startsWith('finding-'))"
                 + ".reduce((n, b) => n + b.content.getLayers().length, 0)");
         assertEquals(placed, drawn.asInt(), "every finding with a place is on the map");
-        assertTableShows(printed);
+        SummaryCells.assertTableShows(chromium, printed);
         assertEquals(List.of(), chromium.problems());
-    }
-
-    /** Every number and text of the summary table is the one the command printed with --json. */
-    private static JsonNode assertTableShows(JsonNode printed) throws Exception {
-        JsonNode cells = chromium.eval("Array.from(document.querySelectorAll('#summary [data-key]'))"
-                + ".map(c => [c.dataset.key, c.textContent])");
-        assertTrue(cells.size() > 20, "the summary table has the summary's fields: " + cells.size());
-        for (JsonNode cell : cells) {
-            JsonNode expected = at(printed, cell.get(0).asText());
-            String shown = cell.get(1).asText();
-            if (expected.isNumber()) {
-                assertEquals(0, expected.decimalValue().compareTo(new BigDecimal(shown)), cell.toString());
-            } else {
-                assertEquals(expected.isValueNode() ? expected.asText() : expected.toString(), shown, cell.toString());
-            }
-        }
-        return cells;
     }
 
     private static JsonNode plan(Path layer, Path html, String... more) throws Exception {
@@ -204,13 +186,5 @@ class HtmlReportBrowserTest {
         int code = Main.run(args.toArray(new String[0]), new PrintWriter(out), new PrintWriter(err));
         assertEquals(0, code, err.toString());
         return MAPPER.readTree(out.toString());
-    }
-
-    private static JsonNode at(JsonNode root, String path) {
-        JsonNode node = root;
-        for (String part : path.split("\\.")) {
-            node = node.isArray() ? node.get(Integer.parseInt(part)) : node.get(part);
-        }
-        return node;
     }
 }
