@@ -151,6 +151,10 @@ public final class AuditCommand implements Callable<Integer> {
         }
         field.check(spec.commandLine());
         report.validate();
+        if (start != null && field.tripOptions.requested()) {
+            throw new CommandLine.ParameterException(spec.commandLine(),
+                    "--start cannot be combined with the trip options: every trip starts and ends at the depot");
+        }
         MatchSettings settings = new MatchSettings(sigma, radius, beta, maxGap, maxSpeed / 3.6);
         StageClock clock = new StageClock(TerminalProgress.forCommandLine(quiet, System.err));
         TrackLines seen = new TrackLines();
@@ -203,21 +207,22 @@ public final class AuditCommand implements Callable<Integer> {
 
     /** Plans the mop-up tour and writes it; returns its part of the summary. */
     private PlanSummary.Section mopUp(Audit audit, StageClock clock) {
-        StreetNetwork network = audit.coverage().network();
-        NearestNode.Hit depotHit = DepotPlacement.place(network, network.features(), depot, depotReach, layerFile);
+        StreetNetwork audited = audit.coverage().network();
+        NearestNode.Hit depotHit = DepotPlacement.place(audited, audited.features(), depot, depotReach, layerFile);
         int first = start == null ? depotHit.node()
-                : DepotPlacement.place(network, network.features(), start, depotReach, layerFile).node();
+                : DepotPlacement.place(audited, audited.features(), start, depotReach, layerFile).node();
         MopUpPlanner.MopUp planned = clock.time("mop-up", () ->
                 MopUpPlanner.plan(audit.coverage(), depotHit.node(), first, layerFile.getFileName().toString()));
         if (planned == null) {
             return MopUpSection.nothing();
         }
+        StreetNetwork network = planned.network();
         Plan plan = field.arrange(new Plan(new PlanRequest(layerFile, depot, layer.snap(), depotReach, false,
                 layer.readOptions()), audit.read(), network, Components.of(network), depotHit.node(),
                 depot == null ? 0 : depotHit.distance(), planned.augmentation(), planned.tours(), List.of()), clock);
         mopUpPlan = plan;
         if (mopUpOut != null) {
-            clock.run("write mop-up", () -> new TourGeoJsonWriter(false).write(mopUpOut, network, plan.tours()));
+            clock.run("write mop-up", () -> new TourGeoJsonWriter(true).write(mopUpOut, network, plan.tours()));
         }
         return MopUpSection.of(plan, planned, field.write(plan, clock), mopUpOut);
     }

@@ -14,10 +14,12 @@ import org.streetcomb.tour.TourPlanner;
 
 /**
  * Plans the mop-up: a tour that services only what an audit found missed, travelling on any street to get
- * there. Each edge a mop-up must service ({@link CoverageReport#mopUp}) needs one pass in each direction in
- * which it has a missed part: either way for a two-way street driven once, the permitted direction of a
- * one-way street, each missing side for both kerbs. This is a rural postman problem; {@link PostmanVariants}
- * picks the solver (undirected, directed or mixed) and {@link TourPlanner} orders and validates the tours.
+ * there. It is planned on the {@link MissedStretchNetwork}, where each missed stretch of an edge flagged for
+ * mop-up ({@link CoverageReport#mopUp}) is an edge of its own that needs one pass in the way it was missed:
+ * either way for a two-way street driven once, the permitted direction of a one-way street, each missing side
+ * for both kerbs; the driven rest of the street is road to travel on. This is a rural postman problem;
+ * {@link PostmanVariants} picks the solver (undirected, directed or mixed) and {@link TourPlanner} orders and
+ * validates the tours.
  * The tour is closed at the depot, or, from a given start (where the crew is now), open and ends at the
  * depot. Streets in parts of the network not connected to the start get a closed tour each.
  */
@@ -33,6 +35,11 @@ public final class MopUpPlanner {
      * @param end           where the first tour ends (the depot)
      */
     public record MopUp(PostmanProblem problem, Augmentation augmentation, List<Tour> tours, int start, int end) {
+
+        /** The network the tours run on: the audited one with the mop-up edges cut at their missed stretches. */
+        public StreetNetwork network() {
+            return problem.network();
+        }
 
         public double length() {
             return tours.stream().mapToDouble(t -> t.length(problem.network())).sum();
@@ -53,8 +60,9 @@ public final class MopUpPlanner {
      * @return the mop-up, or null when nothing needs servicing
      */
     public static MopUp plan(CoverageReport report, int depot, int first, String source) {
-        StreetNetwork network = report.network();
-        ServiceDemand demand = demand(report);
+        MissedStretchNetwork stretches = MissedStretchNetwork.of(report);
+        StreetNetwork network = stretches.network();
+        ServiceDemand demand = stretches.demand();
         boolean any = false;
         for (int e = 0; e < network.edgeCount() && !any; e++) {
             any = demand.needs(e);
@@ -72,25 +80,5 @@ public final class MopUpPlanner {
         ReachabilityCheck.check(problem, source);
         Augmentation augmentation = PostmanVariants.solve(problem);
         return new MopUp(problem, augmentation, TourPlanner.tours(problem, components, augmentation), first, end);
-    }
-
-    /** One pass per direction in which a mop-up edge has a missed part. */
-    static ServiceDemand demand(CoverageReport report) {
-        int m = report.network().edgeCount();
-        int[] along = new int[m];
-        int[] against = new int[m];
-        int[] either = new int[m];
-        for (MissedPart part : report.missed()) {
-            int e = part.edge();
-            if (!report.mopUp()[e]) {
-                continue;
-            }
-            switch (part.way()) {
-                case ALONG -> along[e] = 1;
-                case AGAINST -> against[e] = 1;
-                case EITHER -> either[e] = 1;
-            }
-        }
-        return new ServiceDemand(along, against, either);
     }
 }

@@ -171,7 +171,7 @@ class AuditCommandTest {
         int depot = NearestNode.of(network, -31.2, 44.6).node();
         var planned = org.streetcomb.coverage.MopUpPlanner.plan(audit.coverage(), depot, depot, "demo");
         Path second = dir.resolve("mop-up-drive.gpx");
-        SimulatedDrive.writeGpx(second, SimulatedDrive.drive(network, planned.tours(),
+        SimulatedDrive.writeGpx(second, SimulatedDrive.drive(planned.network(), planned.tours(),
                 new SimulatedDrive.Settings(20, 40, 1, 5, 10, 300, 2, 10), 8, SimulatedDrive.START + 86_400), true);
         Run after = run("audit", DEMO, drive.toString(), second.toString(), "--json", "--mop-up", dir.resolve("none.geojson").toString());
         JsonNode done = new ObjectMapper().readTree(after.out());

@@ -1,0 +1,108 @@
+package org.streetcomb.coverage;
+
+import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.List;
+import org.streetcomb.network.SplitNetwork;
+import org.streetcomb.network.StreetNetwork;
+import org.streetcomb.solve.ServiceDemand;
+
+/**
+ * The network a mop-up is planned on: each edge flagged for mop-up ({@link CoverageReport#mopUp}) is cut at
+ * the ends of its missed stretches, so that each stretch becomes an edge of its own that needs a service pass
+ * in the way it was missed (either way, along, or against the digitised direction), and the driven rest of
+ * the edge becomes road that may be driven as deadhead but needs no service. Every other edge is kept whole
+ * with no demand.
+ *
+ * <p>A driven stretch shorter than {@link #MERGE_GAP} between two missed stretches of the same way, or
+ * between a missed stretch and the end of its edge, is serviced with them: the crew is not told to stop and
+ * restart service for a few metres, and a driven stretch that short is within the reach of GPS noise (two
+ * standard deviations of the audit's default 10 m), so it may not have been driven at all. O(edges + missed
+ * parts log missed parts).
+ *
+ * @param split   the cut network, with each piece's parent edge and offsets
+ * @param demand  the service passes each piece needs
+ */
+public record MissedStretchNetwork(SplitNetwork split, ServiceDemand demand) {
+
+    /** Driven stretches shorter than this (metres) between missed ones, or at an edge's end, are serviced too. */
+    public static final double MERGE_GAP = 20;
+
+    public StreetNetwork network() {
+        return split.network();
+    }
+
+    public static MissedStretchNetwork of(CoverageReport report) {
+        StreetNetwork network = report.network();
+        int m = network.edgeCount();
+        List<List<MissedPart>> byEdge = new ArrayList<>(m);
+        for (int e = 0; e < m; e++) {
+            byEdge.add(new ArrayList<>());
+        }
+        for (MissedPart part : report.missed()) {
+            if (report.mopUp()[part.edge()]) {
+                byEdge.get(part.edge()).add(part);
+            }
+        }
+        double[][] cuts = new double[m][];
+        List<List<MissedPart>> stretches = new ArrayList<>(m);
+        for (int e = 0; e < m; e++) {
+            List<MissedPart> merged = merged(byEdge.get(e), network.length(e));
+            stretches.add(merged);
+            cuts[e] = cuts(merged, network.length(e));
+        }
+        SplitNetwork split = SplitNetwork.of(network, cuts);
+        int pieces = split.network().edgeCount();
+        int[] along = new int[pieces];
+        int[] against = new int[pieces];
+        int[] either = new int[pieces];
+        for (int p = 0; p < pieces; p++) {
+            double middle = (split.start()[p] + split.end()[p]) / 2;
+            for (MissedPart s : stretches.get(split.parent()[p])) {
+                if (s.from() <= middle && middle <= s.to()) {
+                    switch (s.way()) {
+                        case ALONG -> along[p] = 1;
+                        case AGAINST -> against[p] = 1;
+                        case EITHER -> either[p] = 1;
+                    }
+                }
+            }
+        }
+        return new MissedStretchNetwork(split, new ServiceDemand(along, against, either));
+    }
+
+    /** The edge's missed parts with short driven gaps between those of the same way closed, sorted by way and start. */
+    static List<MissedPart> merged(List<MissedPart> parts, double length) {
+        List<MissedPart> sorted = new ArrayList<>(parts);
+        sorted.sort((a, b) -> a.way() != b.way() ? a.way().compareTo(b.way()) : Double.compare(a.from(), b.from()));
+        List<MissedPart> out = new ArrayList<>();
+        for (MissedPart part : sorted) {
+            double from = part.from() < MERGE_GAP ? 0 : part.from();
+            double to = length - part.to() < MERGE_GAP ? length : part.to();
+            MissedPart last = out.isEmpty() ? null : out.get(out.size() - 1);
+            if (last != null && last.way() == part.way() && from - last.to() < MERGE_GAP) {
+                out.set(out.size() - 1, new MissedPart(part.edge(), last.from(), Math.max(last.to(), to), part.way()));
+            } else {
+                out.add(new MissedPart(part.edge(), from, to, part.way()));
+            }
+        }
+        return out;
+    }
+
+    /** The stretches' ends inside the edge, in increasing order. */
+    private static double[] cuts(List<MissedPart> stretches, double length) {
+        double[] cuts = new double[2 * stretches.size()];
+        int n = 0;
+        for (MissedPart s : stretches) {
+            if (s.from() > 0) {
+                cuts[n++] = s.from();
+            }
+            if (s.to() < length) {
+                cuts[n++] = s.to();
+            }
+        }
+        double[] sorted = Arrays.copyOf(cuts, n);
+        Arrays.sort(sorted);
+        return sorted;
+    }
+}
