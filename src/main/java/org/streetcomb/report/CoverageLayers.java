@@ -2,11 +2,14 @@ package org.streetcomb.report;
 
 import java.util.ArrayList;
 import java.util.EnumMap;
+import java.util.EnumSet;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
+import java.util.Set;
 import org.locationtech.jts.geom.Coordinate;
+import org.locationtech.jts.geom.LineString;
 import org.streetcomb.coverage.CoverageReport;
 import org.streetcomb.coverage.CoverageStatus;
 import org.streetcomb.coverage.EdgeSlice;
@@ -21,7 +24,9 @@ import org.streetcomb.read.Travel;
 /**
  * The map layers of a coverage audit: every street line in the colour of its status (one layer per
  * status, so each can be switched alone), the stretches still to drive, stretches of one-way streets
- * driven the wrong way, and the recorded tracks.
+ * driven the wrong way, and the recorded tracks. Covered streets and streets not required are drawn one
+ * feature per street name (a street split at every junction is one thing to point at, and a large layer
+ * stays small); partly covered and missed street lines are one feature each.
  *
  * <p>Colours: the four-class diverging red-blue scheme of ColorBrewer 2.0 (Brewer, Penn State), which its
  * authors mark safe for colour-blind viewers, with the light blue for covered, the dark red for missed and
@@ -42,6 +47,8 @@ public final class CoverageLayers {
             CoverageStatus.PARTLY, MapStyle.solid(PARTLY, 4, 0.95),
             CoverageStatus.MISSED, MapStyle.solid(MISSED, 5, 0.95),
             CoverageStatus.NOT_REQUIRED, new MapStyle(NOT_REQUIRED, 2, 1, "4 4")));
+    /** Statuses drawn one feature per street name. */
+    private static final Set<CoverageStatus> MERGED = EnumSet.of(CoverageStatus.COVERED, CoverageStatus.NOT_REQUIRED);
     /** Stretches shorter than this get no arrow: it would not be readable. */
     private static final double MIN_ARROW_PART = 6;
 
@@ -63,11 +70,26 @@ public final class CoverageLayers {
 
     private List<MapLayer> layers(TrackLines tracks) {
         Map<CoverageStatus, List<MapFeature>> byStatus = new EnumMap<>(CoverageStatus.class);
+        Map<CoverageStatus, Integer> lines = new EnumMap<>(CoverageStatus.class);
+        Map<CoverageStatus, Map<String, List<StreetCoverage>>> byName = new EnumMap<>(CoverageStatus.class);
         for (CoverageStatus status : CoverageStatus.values()) {
             byStatus.put(status, new ArrayList<>());
+            lines.put(status, 0);
+            byName.put(status, new LinkedHashMap<>());
         }
         for (StreetCoverage street : coverage.streets()) {
-            byStatus.get(street.status()).add(street(street));
+            lines.merge(street.status(), 1, Integer::sum);
+            if (MERGED.contains(street.status())) {
+                byName.get(street.status()).computeIfAbsent(NetworkLayer.streetKey(street.feature()), k -> new ArrayList<>())
+                        .add(street);
+            } else {
+                byStatus.get(street.status()).add(street(street));
+            }
+        }
+        for (CoverageStatus status : MERGED) {
+            for (List<StreetCoverage> named : byName.get(status).values()) {
+                byStatus.get(status).add(named.size() == 1 ? street(named.get(0)) : sameName(named));
+            }
         }
         String threshold = percent(coverage.threshold());
         String missedBelow = percent(StreetCoverageAccounting.MISSED_BELOW);
@@ -75,13 +97,14 @@ public final class CoverageLayers {
         List<MapLayer> layers = new ArrayList<>();
         if (!byStatus.get(CoverageStatus.NOT_REQUIRED).isEmpty()) {
             layers.add(status(CoverageStatus.NOT_REQUIRED, "Not required", "streets used only to travel between others",
-                    byStatus));
+                    byStatus, lines));
         }
         layers.add(status(CoverageStatus.COVERED, "Covered", "at least " + threshold + " of the street driven, one-way "
-                + "streets in their direction" + how, byStatus));
+                + "streets in their direction" + how, byStatus, lines));
         layers.add(status(CoverageStatus.PARTLY, "Partly covered", missedBelow + " to " + threshold + " driven" + how,
-                byStatus));
-        layers.add(status(CoverageStatus.MISSED, "Missed", "less than " + missedBelow + " driven" + how, byStatus));
+                byStatus, lines));
+        layers.add(status(CoverageStatus.MISSED, "Missed", "less than " + missedBelow + " driven" + how, byStatus,
+                lines));
         List<MapFeature> parts = new ArrayList<>();
         for (MissedPart part : coverage.missed()) {
             parts.add(missed(part));
@@ -103,11 +126,44 @@ public final class CoverageLayers {
         return layers;
     }
 
+    /** A status's layer, titled with its number of street lines (the summary's count). */
     private static MapLayer status(CoverageStatus status, String title, String note,
-                                   Map<CoverageStatus, List<MapFeature>> byStatus) {
-        List<MapFeature> features = byStatus.get(status);
-        return new MapLayer(status.label().replace(' ', '-'), title + " (" + features.size() + ")", note,
-                MapLayer.Kind.LINES, STYLES.get(status), true, features);
+                                   Map<CoverageStatus, List<MapFeature>> byStatus, Map<CoverageStatus, Integer> lines) {
+        return new MapLayer(status.label().replace(' ', '-'), title + " (" + lines.get(status) + ")", note,
+                MapLayer.Kind.LINES, STYLES.get(status), true, byStatus.get(status));
+    }
+
+    /** Street lines of one name and one status, sewn together as one thing to point at. */
+    private static MapFeature sameName(List<StreetCoverage> named) {
+        List<LineString> lines = new ArrayList<>();
+        List<String> ids = new ArrayList<>();
+        double needed = 0;
+        double driven = 0;
+        double wrongWay = 0;
+        for (StreetCoverage street : named) {
+            lines.add(street.feature().line());
+            ids.add(street.feature().id());
+            needed += street.needed();
+            driven += street.driven();
+            wrongWay += street.wrongWay();
+        }
+        StreetCoverage first = named.get(0);
+        String name = NetworkLayer.streetName(first.feature());
+        double share = needed > 0 ? Math.min(1, driven / needed) : 1;
+        Map<String, String> details = new LinkedHashMap<>();
+        details.put("Street", name);
+        details.put("Street lines", String.valueOf(named.size()));
+        details.put("Feature ids", NetworkLayer.idList(ids));
+        details.put("Status", first.status().label() + " (each line)");
+        details.put("Driven", share(share));
+        details.put("To drive (m)", metres(needed));
+        details.put("Driven (m)", metres(driven));
+        if (wrongWay > 0) {
+            details.put("Against its one-way (m)", metres(wrongWay));
+        }
+        String label = String.format(Locale.ROOT, "%s: %s, %d lines, %s driven", name, first.status().label(),
+                named.size(), share(share));
+        return new MapFeature(NetworkLayer.merged(lines), null, null, label, details);
     }
 
     private static MapFeature street(StreetCoverage street) {

@@ -50,6 +50,29 @@ public final class NetworkLayer {
         return feature.name().isEmpty() ? "unnamed street (feature " + feature.id() + ")" : feature.name();
     }
 
+    /** The first few ids, and how many more there are. */
+    static String idList(List<String> ids) {
+        return ids.size() <= IDS_LISTED ? String.join(", ", ids)
+                : String.join(", ", ids.subList(0, IDS_LISTED)) + " and " + (ids.size() - IDS_LISTED) + " more";
+    }
+
+    /** Lines sewn into as few parts as possible (JTS LineMerger), each part as lon, lat pairs. */
+    static double[][] merged(List<LineString> lines) {
+        LineMerger merger = new LineMerger();
+        merger.add(lines);
+        List<double[]> parts = new ArrayList<>();
+        for (Object merged : merger.getMergedLineStrings()) {
+            Coordinate[] coordinates = ((LineString) merged).getCoordinates();
+            double[] part = new double[2 * coordinates.length];
+            for (int k = 0; k < coordinates.length; k++) {
+                part[2 * k] = coordinates[k].x;
+                part[2 * k + 1] = coordinates[k].y;
+            }
+            parts.add(part);
+        }
+        return parts.toArray(new double[0][]);
+    }
+
     /** The edge's polyline in the direction of travel, as lon, lat pairs. */
     static double[] edgePoints(StreetNetwork network, int e, boolean forward) {
         int n = network.pointCount(e);
@@ -87,24 +110,11 @@ public final class NetworkLayer {
         }
 
         MapFeature feature() {
-            LineMerger merger = new LineMerger();
-            merger.add(edges);
-            List<double[]> parts = new ArrayList<>();
-            for (Object merged : merger.getMergedLineStrings()) {
-                Coordinate[] coordinates = ((LineString) merged).getCoordinates();
-                double[] part = new double[2 * coordinates.length];
-                for (int k = 0; k < coordinates.length; k++) {
-                    part[2 * k] = coordinates[k].x;
-                    part[2 * k + 1] = coordinates[k].y;
-                }
-                parts.add(part);
-            }
             Map<String, String> details = new LinkedHashMap<>();
-            details.put("Feature ids", ids.size() <= IDS_LISTED ? String.join(", ", ids)
-                    : String.join(", ", ids.subList(0, IDS_LISTED)) + " and " + (ids.size() - IDS_LISTED) + " more");
+            details.put("Feature ids", idList(ids));
             details.put("Length (m)", String.format(Locale.ROOT, "%.1f", length));
             details.put("Edges", String.valueOf(edges.size()));
-            return new MapFeature(parts.toArray(new double[0][]), null, null, name, details);
+            return new MapFeature(merged(edges), null, null, name, details);
         }
     }
 }

@@ -63,7 +63,9 @@ class AuditReportBrowserTest {
                 + " const r = window.streetcombReport;"
                 + " return {features: d.layers.reduce((n, l) => n + l.features.length, 0),"
                 + " drawn: Number(document.body.dataset.drawn),"
-                + " covered: ids('covered').length, missed: ids('missed'), parts: ids('not-driven').length,"
+                + " covered: d.layers.find(x => x.id === 'covered').features.reduce((n, f) =>"
+                + " n + Number((f.d.find(r => r[0] === 'Street lines') || [0, 1])[1]), 0),"
+                + " missed: ids('missed'), parts: ids('not-driven').length,"
                 + " tracksAtStart: r.buckets.filter(b => b.layer === 'tracks' && r.map.hasLayer(b.content)).length,"
                 + " serviceOnMap: r.buckets.filter(b => b.layer === 'service' && r.map.hasLayer(b.content)).length,"
                 + " run: document.getElementById('run').textContent,"
@@ -72,7 +74,8 @@ class AuditReportBrowserTest {
         List<String> missed = new ArrayList<>();
         map.get("missed").forEach(id -> missed.add(id.asText()));
         assertEquals(SKIPPED, Set.copyOf(missed), "the streets the drive left out are drawn as missed");
-        assertEquals(printed.at("/coverage/streets/covered").asInt(), map.get("covered").asInt());
+        assertEquals(printed.at("/coverage/streets/covered").asInt(), map.get("covered").asInt(),
+                "the covered layer holds every covered street line");
         assertEquals(printed.at("/coverage/missed_parts").asInt(), map.get("parts").asInt());
         assertEquals(0, map.get("tracksAtStart").asInt(), "the tracks start switched off");
         assertTrue(map.get("serviceOnMap").asInt() > 0, "the mop-up tour is drawn: " + map);
