@@ -4,9 +4,7 @@ import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.BitSet;
 import java.util.List;
-import org.jgrapht.Graph;
-import org.jgrapht.alg.connectivity.BiconnectivityInspector;
-import org.jgrapht.graph.Pseudograph;
+import org.streetcomb.network.Bridges;
 import org.streetcomb.network.LocalFrame;
 import org.streetcomb.network.StreetNetwork;
 import org.streetcomb.read.Travel;
@@ -15,8 +13,8 @@ import org.streetcomb.read.Travel;
  * Turning pockets: small dead-end structures such as the loop of a turning head, too small for GPS to tell
  * which of their edges a vehicle drove.
  *
- * <p>A pocket is the far side of a bridge edge (one whose removal cuts the network, found with JGraphT's
- * {@link BiconnectivityInspector}) that holds at least one edge and fits in a square of side {@code size}
+ * <p>A pocket is the far side of a bridge edge (one whose removal cuts the network, found with
+ * {@link Bridges}) that holds at least one edge and fits in a square of side {@code size}
  * metres. A vehicle that enters a pocket must turn inside it and leave the way it came, but with fixes
  * metres apart and noise of several metres the matched path through a loop 20 m across is a guess; so
  * when the matched path entered a pocket, the whole pocket counts as driven. Larger dead-end structures are
@@ -32,16 +30,8 @@ final class TurningPockets {
 
     /** The edge sets of the pockets of {@code network} that fit in a square of side {@code size} metres. */
     static List<int[]> of(StreetNetwork network, LocalFrame frame, double size) {
-        Graph<Integer, Integer> graph = new Pseudograph<>(Integer.class);
-        for (int v = 0; v < network.nodeCount(); v++) {
-            graph.addVertex(v);
-        }
-        for (int e = 0; e < network.edgeCount(); e++) {
-            graph.addEdge(network.from(e), network.to(e), e);
-        }
-        int[] bridges = new BiconnectivityInspector<>(graph).getBridges().stream().mapToInt(Integer::intValue).sorted().toArray();
         List<int[]> pockets = new ArrayList<>();
-        for (int bridge : bridges) {
+        for (int bridge : Bridges.of(network)) {
             for (int side : new int[] {network.from(bridge), network.to(bridge)}) {
                 int[] pocket = beyond(network, bridge, side);
                 if (pocket != null && pocket.length > 0 && fits(network, frame, pocket, size)) {

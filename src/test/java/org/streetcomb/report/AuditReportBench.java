@@ -7,6 +7,7 @@ import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
 import java.util.Locale;
+import java.util.Map;
 import java.util.Random;
 import org.streetcomb.coverage.Audit;
 import org.streetcomb.coverage.AuditRequest;
@@ -20,12 +21,14 @@ import org.streetcomb.plan.StageClock;
 import org.streetcomb.read.LayerReaders;
 import org.streetcomb.read.ReadOptions;
 import org.streetcomb.read.RoadFeature;
+import org.streetcomb.read.Travel;
 import org.streetcomb.solve.UndirectedPostman;
 import org.streetcomb.tour.TourPlanner;
 
 /**
  * Benchmark of the audit report (run by docs/audit-report-bench.sh, not by the tests): for each layer, a
  * simulated drive (invented data: the postman tour of the layer without a seeded 10 % of its street lines,
+ * one-way streets driven either way,
  * 20-40 km/h, a fix every 1-5 s, 10 m noise, short dropouts) is written as GPX and audited; then the audit's
  * HTML report and PNG quick look are written and the report is opened in headless Chromium three times.
  * Prints file sizes, write times as ratios to the audit's own time, and load times as ratios to the first
@@ -65,9 +68,13 @@ public final class AuditReportBench {
         String name = layer.getFileName().toString().replaceFirst("\\.[^.]*$", "");
         List<RoadFeature> lines = LayerReaders.read(layer).features();
         Random random = new Random(1);
-        List<RoadFeature> driven = lines.stream().filter(f -> random.nextDouble() >= 0.1).toList();
+        // the simulated crew drives one-way streets either way: the audit shows that as wrong-way stretches
+        List<RoadFeature> driven = lines.stream().filter(f -> random.nextDouble() >= 0.1)
+                .map(f -> new RoadFeature(f.id(), f.name(), f.line(), Travel.BOTH, true, Map.of())).toList();
         StreetNetwork network = new NetworkBuilder(0.5).build(driven);
-        var tours = TourPlanner.tours(network, Components.of(network), UndirectedPostman.solve(network), 0, false);
+        // small separate parts are left undriven: a recording of a few seconds may hold no fix at all
+        var tours = TourPlanner.tours(network, Components.of(network), UndirectedPostman.solve(network), 0, false).stream()
+                .filter(t -> t.length(network) > 1000).toList();
         Path gpx = folder.resolve(name + "-drive.gpx");
         SimulatedDrive.writeGpx(gpx, SimulatedDrive.drive(network, tours,
                 new SimulatedDrive.Settings(20, 40, 1, 5, 10, 300, 2, 10), 7, SimulatedDrive.START), true);
