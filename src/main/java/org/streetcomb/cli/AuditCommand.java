@@ -106,6 +106,12 @@ public final class AuditCommand implements Callable<Integer> {
                     + "improbable (Newson-Krumm beta; default: ${DEFAULT-VALUE} m).")
     double beta;
 
+    @Option(names = "--doubt-odds", paramLabel = "N", defaultValue = "20",
+            description = "Credit the streets of every drive that fits the fixes at most N times worse than the "
+                    + "best fitting drive, as where a dropout hides which of two ways was taken; 1 credits "
+                    + "the best fitting drive only (default: ${DEFAULT-VALUE}).")
+    double doubtOdds;
+
     @Option(names = "--max-gap", paramLabel = "METRES", defaultValue = "300",
             description = "The longest stretch credited between two consecutive fixes; a longer dropout is not "
                     + "counted as driven (default: ${DEFAULT-VALUE} m).")
@@ -146,6 +152,9 @@ public final class AuditCommand implements Callable<Integer> {
         positive(beta, "--route-scale");
         positive(maxGap, "--max-gap");
         positive(maxSpeed, "--max-speed");
+        if (!(doubtOdds >= 1) || !Double.isFinite(doubtOdds)) {
+            throw new CommandLine.ParameterException(spec.commandLine(), "--doubt-odds must be 1 or more");
+        }
         if (!(depotReach >= 0)) {
             throw new CommandLine.ParameterException(spec.commandLine(), "--depot-reach must be 0 or more metres");
         }
@@ -155,7 +164,7 @@ public final class AuditCommand implements Callable<Integer> {
             throw new CommandLine.ParameterException(spec.commandLine(),
                     "--start cannot be combined with the trip options: every trip starts and ends at the depot");
         }
-        MatchSettings settings = new MatchSettings(sigma, radius, beta, maxGap, maxSpeed / 3.6);
+        MatchSettings settings = new MatchSettings(sigma, radius, beta, maxGap, maxSpeed / 3.6, doubtOdds);
         StageClock clock = new StageClock(TerminalProgress.forCommandLine(quiet, System.err));
         TrackLines seen = new TrackLines();
         Audit audit = DriveAudit.run(new AuditRequest(layerFile, tracks, layer.snap(), settings, coveredAt, bothKerbs,

@@ -26,11 +26,17 @@ import org.streetcomb.read.TrackSegment;
  * move charged for its signed step, so the backward steps of noise cost little and steady backward motion
  * loses to the other direction. Turning back onto the same edge at a node where the street goes on costs
  * {@value #U_TURN} m more (an addition to the published model: noise makes such turns look cheap, crews
- * rarely make them, and without it a turning loop is read as a turn at its mouth). The most probable
- * sequence is found by the
- * Viterbi algorithm. Routes are bounded by the gap limit and, for timed fixes, by the speed limit; where
+ * rarely make them, and without it a turning loop is read as a turn at its mouth). Routes are bounded by the gap limit and, for timed fixes, by the speed limit; where
  * no route is believable the match is split and nothing is credited across the split, as Newson &amp; Krumm
  * break the chain where the HMM cannot continue.
+ *
+ * <p>What is credited: not only the most probable drive (Newson &amp; Krumm's Viterbi path) but every move
+ * that lies on some drive at most {@link MatchSettings#doubtOdds} times less probable, found by a forward
+ * (Viterbi) and a backward max-product pass, as for max-marginals. Coverage asks a different question from
+ * navigation: not "which way did it go" but "could it have gone here". Where the track cannot tell, in a
+ * dropout beside a loop or between two fixes at the mouth of a short dead end, the single best path picks
+ * one way arbitrarily and reports the other as missed; a street 20 m beside the driven one, which the fixes
+ * speak against, stays uncredited.
  *
  * <p>Written by hand: no library on Maven Central matches against a network of our own arrays. Cost per
  * fix pair: one bounded Dijkstra search per distinct exit node of the previous fix's states, plus
@@ -40,6 +46,8 @@ public final class HmmMapMatcher {
 
     /** Weight of the newest move in the smoothed speed. */
     private static final double PACE_WEIGHT = 0.2;
+    /** Log-probability lost to rounding when a chain's score is summed forward and taken apart backward. */
+    private static final double ROUNDING = 1e-6;
     /** Extra route metres charged for turning back at a node where the street goes on. */
     static final double U_TURN = 50;
 
@@ -49,6 +57,7 @@ public final class HmmMapMatcher {
     private final MatchSettings settings;
     private final DijkstraSearch search;
     private final int[] entryStamp;
+    private final Moves scratch = new Moves(256);
     private int stamp;
     /** Recent speed of the vehicle, metres per second (0 until known): a smoothed mean over matched moves. */
     private double pace;
@@ -72,10 +81,10 @@ public final class HmmMapMatcher {
         final boolean[] along;
         final double[] offset;
         final double[] emission;
+        /** Forward (Viterbi) score: log-probability of the best drive ending in each state. */
         final double[] score;
-        final int[] back;
-        /** Whether the best move into each state stayed on one edge (else it went through the nodes). */
-        final boolean[] direct;
+        /** The moves into this layer kept for crediting; see {@link Moves}. */
+        Moves moves = Moves.NONE;
 
         Layer(double x, double y, double time, StreetIndex.Hits hits, double sigma) {
             this.x = x;
@@ -87,8 +96,6 @@ public final class HmmMapMatcher {
             offset = new double[size];
             emission = new double[size];
             score = new double[size];
-            back = new int[size];
-            direct = new boolean[size];
             for (int h = 0; h < hits.count(); h++) {
                 double z = hits.distance()[h] / sigma;
                 for (int d = 0; d < 2; d++) {
@@ -126,7 +133,6 @@ public final class HmmMapMatcher {
                     chain.clear();
                 }
                 System.arraycopy(layer.emission, 0, layer.score, 0, layer.size);
-                Arrays.fill(layer.back, -1);
             }
             chain.add(layer);
         }
@@ -140,7 +146,7 @@ public final class HmmMapMatcher {
         double seconds = next.time - previous.time;
         double reach = seconds > 0 && pace > 0 ? Math.min(limit, Math.max(line, pace * seconds)) : line;
         Arrays.fill(next.score, Double.NEGATIVE_INFINITY);
-        Arrays.fill(next.back, -1);
+        scratch.clear();
         stamp++;
         for (int j = 0; j < next.size; j++) {
             entryStamp[entry(next, j)] = stamp;
@@ -163,22 +169,21 @@ public final class HmmMapMatcher {
                 }
             }
         }
-        for (int j = 0; j < next.size; j++) {
-            if (next.back[j] >= 0) {
-                if (seconds > 0) {
-                    pace = pace == 0 ? line / seconds : (1 - PACE_WEIGHT) * pace + PACE_WEIGHT * line / seconds;
-                }
-                return true;
-            }
+        if (scratch.size == 0) {
+            return false;
         }
-        return false;
+        next.moves = scratch.within(next.score, settings.margin());
+        if (seconds > 0) {
+            pace = pace == 0 ? line / seconds : (1 - PACE_WEIGHT) * pace + PACE_WEIGHT * line / seconds;
+        }
+        return true;
     }
 
     /**
-     * Scores the move from state k of a to state j of b, keeping it when it is the best so far. A move along
-     * one edge in one direction is charged |line - step| for its signed step, so noise that steps a few
-     * metres back costs a little, while steady backward motion costs twice its length and loses to the
-     * opposite direction. Any other move follows the route through the nodes.
+     * Scores the move from state k of a to state j of b. A move along one edge in one direction is charged
+     * |line - step| for its signed step, so noise that steps a few metres back costs a little, while steady
+     * backward motion costs twice its length and loses to the opposite direction. Any other move follows
+     * the route through the nodes.
      */
     private void score(Layer a, int k, Layer b, int j, double line, double reach, double limit, double nodeDistance) {
         double via = network.length(a.edge[k]) - progress(a, k) + nodeDistance + progress(b, j);
@@ -191,11 +196,8 @@ public final class HmmMapMatcher {
             return;
         }
         double score = a.score[k] - cost / settings.beta() + b.emission[j];
-        if (score > b.score[j]) {
-            b.score[j] = score;
-            b.back[j] = k;
-            b.direct[j] = directCost <= viaCost;
-        }
+        scratch.add(k, j, score, directCost <= viaCost);
+        b.score[j] = Math.max(b.score[j], score);
     }
 
     /** How far a route falls outside [line, reach]: Newson &amp; Krumm's |line - route| when reach = line. */
@@ -262,33 +264,49 @@ public final class HmmMapMatcher {
         return layer.along[s] ? network.from(layer.edge[s]) : network.to(layer.edge[s]);
     }
 
-    /** Backtracks the most probable states of a chain and records the stretches between them. */
+    /**
+     * Credits every move that some drive within the margin of the most probable one makes. A backward pass
+     * over the kept moves gives, per state, the best log-probability of the rest of the chain; a move's best
+     * whole drive is its forward score plus that of the state it reaches. With a zero margin these are the
+     * moves of the Viterbi path (and of drives tied with it).
+     */
     private void finish(List<Layer> chain, DrivenIntervals driven, MatchTally tally) {
         if (chain.size() < 2) {
             return;
         }
         tally.chains++;
         tally.matched += chain.size();
-        Layer last = chain.get(chain.size() - 1);
-        int state = 0;
-        for (int s = 1; s < last.size; s++) {
-            if (last.score[s] > last.score[state]) {
-                state = s;
+        int n = chain.size();
+        double[][] rest = new double[n][];
+        rest[n - 1] = new double[chain.get(n - 1).size];
+        double best = Double.NEGATIVE_INFINITY;
+        for (double s : chain.get(n - 1).score) {
+            best = Math.max(best, s);
+        }
+        for (int k = n - 2; k >= 0; k--) {
+            Layer a = chain.get(k);
+            Moves moves = chain.get(k + 1).moves;
+            rest[k] = new double[a.size];
+            Arrays.fill(rest[k], Double.NEGATIVE_INFINITY);
+            for (int m = 0; m < moves.size; m++) {
+                int i = moves.from[m];
+                rest[k][i] = Math.max(rest[k][i], moves.score[m] - a.score[i] + rest[k + 1][moves.to[m]]);
             }
         }
-        int[] states = new int[chain.size()];
-        for (int k = chain.size() - 1; k >= 0; k--) {
-            states[k] = state;
-            state = chain.get(k).back[state];
-        }
-        for (int k = 1; k < chain.size(); k++) {
-            credit(chain.get(k - 1), states[k - 1], chain.get(k), states[k], driven);
+        for (int k = 1; k < n; k++) {
+            Layer b = chain.get(k);
+            Moves moves = b.moves;
+            for (int m = 0; m < moves.size; m++) {
+                if (moves.score[m] + rest[k][moves.to[m]] >= best - settings.margin() - ROUNDING) {
+                    credit(chain.get(k - 1), moves.from[m], b, moves.to[m], moves.direct[m], driven);
+                }
+            }
         }
     }
 
-    /** Records the stretch from state i of a to state j of b, by the move the Viterbi step chose. */
-    private void credit(Layer a, int i, Layer b, int j, DrivenIntervals driven) {
-        if (b.direct[j]) {
+    /** Records the stretch from state i of a to state j of b, along one edge or through the nodes. */
+    private void credit(Layer a, int i, Layer b, int j, boolean direct, DrivenIntervals driven) {
+        if (direct) {
             driven.add(a.edge[i], a.along[i], a.offset[i], b.offset[j]);
             return;
         }

@@ -10,8 +10,12 @@ package org.streetcomb.coverage;
  * @param maxGap    the longest route credited between two consecutive fixes, metres; a longer gap (a
  *                  dropout) splits the match and the road in between counts as not driven
  * @param maxSpeed  the highest believable speed, metres per second, for timed fixes
+ * @param doubtOdds a drive over the streets is believable when the most probable drive is at most this many
+ *                  times more probable; the stretches of every believable drive are credited (1: the most
+ *                  probable drive only, as Newson &amp; Krumm's Viterbi path)
  */
-public record MatchSettings(double sigma, double radius, double beta, double maxGap, double maxSpeed) {
+public record MatchSettings(double sigma, double radius, double beta, double maxGap, double maxSpeed,
+                            double doubtOdds) {
 
     public static final double DEFAULT_SIGMA = 10;
     public static final double DEFAULT_RADIUS = 50;
@@ -20,14 +24,31 @@ public record MatchSettings(double sigma, double radius, double beta, double max
     /** 200 km/h: faster than any road vehicle on a service round, slower than a receiver's jump. */
     public static final double DEFAULT_MAX_SPEED = 200 / 3.6;
 
+    /**
+     * Odds of 20 to 1: with fixes every few seconds at 10 m noise they credit streets a vehicle passed in a
+     * dropout or between two fixes, yet not a street 20 m beside the one driven (docs/quality.md has the
+     * study behind the choice).
+     */
+    public static final double DEFAULT_DOUBT_ODDS = 20;
+
+    public MatchSettings withDoubtOdds(double odds) {
+        return new MatchSettings(sigma, radius, beta, maxGap, maxSpeed, odds);
+    }
+
+    /** The natural log of {@link #doubtOdds}: how much log-probability a believable drive may lose. */
+    public double margin() {
+        return Math.log(doubtOdds);
+    }
+
     public static MatchSettings defaults() {
-        return new MatchSettings(DEFAULT_SIGMA, DEFAULT_RADIUS, DEFAULT_BETA, DEFAULT_MAX_GAP, DEFAULT_MAX_SPEED);
+        return new MatchSettings(DEFAULT_SIGMA, DEFAULT_RADIUS, DEFAULT_BETA, DEFAULT_MAX_GAP, DEFAULT_MAX_SPEED,
+                DEFAULT_DOUBT_ODDS);
     }
 
     public MatchSettings {
         if (!(sigma > 0) || !(radius > 0) || !(beta > 0) || !(maxGap > 0) || !(maxSpeed > 0)
-                || !Double.isFinite(sigma + radius + beta + maxGap + maxSpeed)) {
-            throw new IllegalArgumentException("matching parameters must be positive and finite");
+                || !(doubtOdds >= 1) || !Double.isFinite(sigma + radius + beta + maxGap + maxSpeed + doubtOdds)) {
+            throw new IllegalArgumentException("matching parameters must be finite, positive, and the odds at least 1");
         }
     }
 }

@@ -244,6 +244,9 @@ class AuditCommandTest {
         assertTrue(n.err().contains("no track points"), n.err());
         assertEquals(ExitCode.USAGE, run("audit", DEMO, drive.toString(), "--covered-at", "1.5").code());
         assertEquals(ExitCode.USAGE, run("audit", DEMO, drive.toString(), "--gps-sigma", "0").code());
+        Run odds = run("audit", DEMO, drive.toString(), "--doubt-odds", "0.5");
+        assertEquals(ExitCode.USAGE, odds.code());
+        assertTrue(odds.err().contains("--doubt-odds must be 1 or more"), odds.err());
         assertEquals(ExitCode.USAGE, run("audit", DEMO).code());
     }
 

@@ -26,12 +26,23 @@ import org.streetcomb.tour.TourPlanner;
  */
 final class SkippedStreetStudy {
 
-    /** Agreement of "not covered" with "skipped", per street. */
-    record Counts(int truePositive, int falsePositive, int falseNegative, int streets, int fixes) {
+    /** Agreement of "not covered" with "skipped", per street and weighted by street length (metres). */
+    record Counts(int truePositive, int falsePositive, int falseNegative, int streets, int fixes,
+                  double truePositiveM, double falsePositiveM, double falseNegativeM) {
 
         Counts plus(Counts o) {
             return new Counts(truePositive + o.truePositive, falsePositive + o.falsePositive,
-                    falseNegative + o.falseNegative, streets + o.streets, fixes + o.fixes);
+                    falseNegative + o.falseNegative, streets + o.streets, fixes + o.fixes,
+                    truePositiveM + o.truePositiveM, falsePositiveM + o.falsePositiveM,
+                    falseNegativeM + o.falseNegativeM);
+        }
+
+        double precisionByLength() {
+            return truePositiveM + falsePositiveM == 0 ? 1 : truePositiveM / (truePositiveM + falsePositiveM);
+        }
+
+        double recallByLength() {
+            return truePositiveM + falseNegativeM == 0 ? 1 : truePositiveM / (truePositiveM + falseNegativeM);
         }
 
         double precision() {
@@ -43,7 +54,7 @@ final class SkippedStreetStudy {
         }
     }
 
-    static final Counts NONE = new Counts(0, 0, 0, 0, 0);
+    static final Counts NONE = new Counts(0, 0, 0, 0, 0, 0, 0, 0);
 
     private SkippedStreetStudy() {
     }
@@ -84,6 +95,7 @@ final class SkippedStreetStudy {
         Map<RoadFeature, StreetCoverage> byFeature = new IdentityHashMap<>();
         report.streets().forEach(s -> byFeature.put(s.feature(), s));
         int tp = 0, fp = 0, fn = 0, streets = 0;
+        double tpM = 0, fpM = 0, fnM = 0;
         for (RoadFeature f : lines) {
             StreetCoverage s = byFeature.get(f);
             if (s == null) {
@@ -95,8 +107,11 @@ final class SkippedStreetStudy {
             tp += flagged && truth ? 1 : 0;
             fp += flagged && !truth ? 1 : 0;
             fn += !flagged && truth ? 1 : 0;
+            tpM += flagged && truth ? s.length() : 0;
+            fpM += flagged && !truth ? s.length() : 0;
+            fnM += !flagged && truth ? s.length() : 0;
         }
         int fixes = segments.stream().mapToInt(TrackSegment::size).sum();
-        return new Counts(tp, fp, fn, streets, fixes);
+        return new Counts(tp, fp, fn, streets, fixes, tpM, fpM, fnM);
     }
 }
