@@ -8,6 +8,7 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.stream.Collectors;
+import org.streetcomb.network.LonLat;
 import org.streetcomb.plan.StageClock;
 import org.streetcomb.report.HtmlReportWriter;
 import org.streetcomb.report.MapGroup;
@@ -147,17 +148,22 @@ final class ReportOptions {
         List<MapReport.Entry> run = new ArrayList<>();
         String args = command.commandLine().getParseResult().originalArgs().stream()
                 .map(ReportOptions::quoted).collect(Collectors.joining(" "));
-        run.add(new MapReport.Entry("Command", command.qualifiedName() + " " + args));
+        // the original arguments start with the command's own name
+        run.add(new MapReport.Entry("Command", command.root().qualifiedName() + " " + args));
         for (PositionalParamSpec positional : command.positionalParameters()) {
             Object value = positional.getValue();
-            if (value instanceof Path path) {
-                run.add(new MapReport.Entry("Input " + positional.paramLabel(), path + sizeOf(path)));
+            List<?> values = value instanceof List<?> list ? list : value == null ? List.of() : List.of(value);
+            for (Object each : values) {
+                if (each instanceof Path path) {
+                    run.add(new MapReport.Entry("Input " + positional.paramLabel(), path + sizeOf(path)));
+                }
             }
         }
         for (OptionSpec option : command.options()) {
             if (!option.usageHelp() && !option.versionHelp()) {
                 Object value = option.getValue();
-                run.add(new MapReport.Entry(option.longestName(), value == null ? "(not set)" : String.valueOf(value)));
+                run.add(new MapReport.Entry(option.longestName(), value == null ? "(not set)"
+                        : value instanceof LonLat at ? at.lon() + "," + at.lat() : String.valueOf(value)));
             }
         }
         return run;

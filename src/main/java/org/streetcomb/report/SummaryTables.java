@@ -155,8 +155,14 @@ final class SummaryTables {
         html.append('>').append(HtmlText.escape(text(value))).append("</td>");
     }
 
-    /** The value as JSON writes it; text without quotes; a nested value as compact JSON. */
+    /**
+     * The value as JSON writes it; text without quotes; a nested value as compact JSON. Decimals are written
+     * out in full: the tree may hold them normalised (200.0 as 2E+2).
+     */
     private static String text(JsonNode value) {
+        if (value.isBigDecimal()) {
+            return value.decimalValue().toPlainString();
+        }
         return value.isValueNode() ? value.asText() : value.toString();
     }
 

@@ -4,7 +4,6 @@ import com.fasterxml.jackson.databind.ObjectMapper;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
-import java.util.Arrays;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
@@ -55,7 +54,7 @@ public final class AuditReportBench {
         }
         try (HeadlessChromium chromium = HeadlessChromium.start(Files.createTempDirectory(folder, "profile"))) {
             for (Result result : results) {
-                load(chromium, result);
+                ReportBench.load(chromium, result.html(), result.loads(), result.allLayers());
             }
         }
         System.out.println();
@@ -97,22 +96,6 @@ public final class AuditReportBench {
                 (t1 - t0) / 1e9, (t2 - t1) / 1e9, (t3 - t2) / 1e9);
     }
 
-    private static void load(HeadlessChromium chromium, Result result) throws Exception {
-        for (int i = 0; i < result.loads.length; i++) {
-            long t0 = System.nanoTime();
-            chromium.open(result.html);
-            chromium.screenshot();
-            result.loads[i] = (System.nanoTime() - t0) / 1e9;
-            long t1 = System.nanoTime();
-            chromium.eval("document.querySelectorAll('input[data-layer]').forEach(b => { if (!b.checked) b.click(); })");
-            chromium.screenshot();
-            result.allLayers[i] = (System.nanoTime() - t1) / 1e9;
-            if (!chromium.problems().isEmpty()) {
-                throw new IllegalStateException(result.name + ": " + chromium.problems());
-            }
-        }
-    }
-
     /** Measurements of one audit report. */
     private record Result(String name, int edges, int fixes, Path html, Path png, double auditSeconds, double htmlSeconds,
                           double pngSeconds, double[] loads, double[] allLayers) {
@@ -128,14 +111,8 @@ public final class AuditReportBench {
                     + "in %.2f s (%.2f x audit); browser load to first screenshot, median of 3: %.2f s (%.1f x %s); "
                     + "every layer switched on and drawn again: %.2f s",
                     name, edges, fixes, auditSeconds, Files.size(html) / 1e6, htmlSeconds, htmlSeconds / auditSeconds,
-                    Files.size(png) / 1e3, pngSeconds, pngSeconds / auditSeconds, median(loads),
-                    median(loads) / median(reference.loads), reference.name, median(allLayers));
-        }
-
-        static double median(double[] values) {
-            double[] sorted = values.clone();
-            Arrays.sort(sorted);
-            return sorted[sorted.length / 2];
+                    Files.size(png) / 1e3, pngSeconds, pngSeconds / auditSeconds, ReportBench.median(loads),
+                    ReportBench.median(loads) / ReportBench.median(reference.loads), reference.name, ReportBench.median(allLayers));
         }
     }
 }

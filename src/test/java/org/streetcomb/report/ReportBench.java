@@ -95,19 +95,33 @@ public final class ReportBench {
     }
 
     private static void load(HeadlessChromium chromium, Result result) throws Exception {
-        for (int i = 0; i < result.loads.length; i++) {
+        load(chromium, result.html, result.loads, result.allLayers);
+    }
+
+    /**
+     * Opens the report as often as {@code loads} is long, timing each load to the first screenshot into
+     * {@code loads} and switching every layer on and drawing again into {@code allLayers}.
+     */
+    static void load(HeadlessChromium chromium, Path html, double[] loads, double[] allLayers) throws Exception {
+        for (int i = 0; i < loads.length; i++) {
             long t0 = System.nanoTime();
-            chromium.open(result.html);
+            chromium.open(html);
             chromium.screenshot();
-            result.loads[i] = (System.nanoTime() - t0) / 1e9;
+            loads[i] = (System.nanoTime() - t0) / 1e9;
             long t1 = System.nanoTime();
             chromium.eval("document.querySelectorAll('input[data-layer]').forEach(b => { if (!b.checked) b.click(); })");
             chromium.screenshot();
-            result.allLayers[i] = (System.nanoTime() - t1) / 1e9;
+            allLayers[i] = (System.nanoTime() - t1) / 1e9;
             if (!chromium.problems().isEmpty()) {
-                throw new IllegalStateException(result.name + ": " + chromium.problems());
+                throw new IllegalStateException(html + ": " + chromium.problems());
             }
         }
+    }
+
+    static double median(double[] values) {
+        double[] sorted = values.clone();
+        Arrays.sort(sorted);
+        return sorted[sorted.length / 2];
     }
 
     /** Measurements of one report. */
@@ -134,12 +148,6 @@ public final class ReportBench {
 
         double load() {
             return median(loads);
-        }
-
-        static double median(double[] values) {
-            double[] sorted = values.clone();
-            Arrays.sort(sorted);
-            return sorted[sorted.length / 2];
         }
 
         String summary(Result reference) throws Exception {
