@@ -67,6 +67,31 @@ class GpxTrackReaderTest {
     }
 
     @Test
+    void eachSegmentNamesItsTrackAsGdalReadsItAndNotAWaypointsName() {
+        // the walk has 8 named tracks and 7 named waypoints (GDAL: tracks and waypoints layers)
+        List<String> names = new ArrayList<>();
+        Matcher name = Pattern.compile("name \\(String\\) = (.*)").matcher(
+                Gdal.ogrinfo(WALK.toString(), "-sql", "SELECT name FROM tracks"));
+        while (name.find()) {
+            names.add(name.group(1).strip());
+        }
+        assertEquals(8, names.size(), names.toString());
+        List<TrackSegment> segments = read(WALK, GpxTrackReader.DEFAULT_WINDOW);
+        Pattern place = Pattern.compile("track (\\d+) \\((.*)\\), segment \\d+");
+        List<String> seen = new ArrayList<>();
+        for (TrackSegment segment : segments) {
+            Matcher m = place.matcher(segment.place());
+            assertTrue(m.matches(), segment.place());
+            assertEquals(names.get(Integer.parseInt(m.group(1)) - 1), m.group(2), segment.place());
+            if (!seen.contains(m.group(2))) {
+                seen.add(m.group(2));
+            }
+        }
+        // the first track's one segment holds no fix, so it is not handed on
+        assertEquals(names.subList(1, names.size()), seen, "every other track's segments carry its name, in order");
+    }
+
+    @Test
     void longSegmentsArriveInWindowsThatShareTheirBoundaryFix() throws IOException {
         Path file = write("<gpx><trk><trkseg>" + points(7) + "</trkseg><trkseg>" + points(1) + "</trkseg></trk></gpx>");
         List<TrackSegment> windows = read(file, 3);
