@@ -76,6 +76,11 @@ public final class AuditCommand implements Callable<Integer> {
                     + "--directions and the trip options write the same tour for the field.")
     Path mopUpOut;
 
+    @Option(names = "--mop-up-turn-back",
+            description = "Let the mop-up turn back where a missed stretch ends in the middle of a street (a car or a "
+                    + "walker can); by default it drives on to the next junction, servicing only the missed stretch.")
+    boolean turnBack;
+
     @Option(names = "--mop-up-ids", paramLabel = "FILE",
             description = "Write the ids of the streets not covered, one per line, for plan --service-ids.")
     Path mopUpIds;
@@ -221,7 +226,8 @@ public final class AuditCommand implements Callable<Integer> {
         int first = start == null ? depotHit.node()
                 : DepotPlacement.place(audited, audited.features(), start, depotReach, layerFile).node();
         MopUpPlanner.MopUp planned = clock.time("mop-up", () ->
-                MopUpPlanner.plan(audit.coverage(), depotHit.node(), first, layerFile.getFileName().toString()));
+                MopUpPlanner.plan(audit.coverage(), depotHit.node(), first, turnBack,
+                        layerFile.getFileName().toString()));
         if (planned == null) {
             return MopUpSection.nothing();
         }

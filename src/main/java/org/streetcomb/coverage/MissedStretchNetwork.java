@@ -6,6 +6,7 @@ import java.util.List;
 import org.streetcomb.network.SplitNetwork;
 import org.streetcomb.network.StreetNetwork;
 import org.streetcomb.solve.ServiceDemand;
+import org.streetcomb.tour.Tour;
 
 /**
  * The network a mop-up is planned on: each edge flagged for mop-up ({@link CoverageReport#mopUp}) is cut at
@@ -69,6 +70,51 @@ public record MissedStretchNetwork(SplitNetwork split, ServiceDemand demand) {
             }
         }
         return new MissedStretchNetwork(split, new ServiceDemand(along, against, either));
+    }
+
+    /** The demand on the audited network's whole edges: a pass each way in which one of an edge's stretches needs one. */
+    public ServiceDemand wholeEdges() {
+        int m = split.parent().length == 0 ? 0 : split.parent()[split.parent().length - 1] + 1;
+        int[] along = new int[m];
+        int[] against = new int[m];
+        int[] either = new int[m];
+        for (int p = 0; p < split.parent().length; p++) {
+            int e = split.parent()[p];
+            along[e] = Math.max(along[e], demand.along()[p]);
+            against[e] = Math.max(against[e], demand.against()[p]);
+            either[e] = Math.max(either[e], demand.either()[p]);
+        }
+        return new ServiceDemand(along, against, either);
+    }
+
+    /**
+     * A tour of the audited network driven over the pieces: each step becomes the pieces of its edge in the
+     * order driven, and a service step services only those pieces that need service in its direction.
+     */
+    public Tour expand(Tour tour) {
+        int[] edges = new int[split.parent().length + tour.steps()];
+        boolean[] forward = new boolean[edges.length];
+        boolean[] service = new boolean[edges.length];
+        int n = 0;
+        for (int i = 0; i < tour.steps(); i++) {
+            int e = tour.edges()[i];
+            boolean along = tour.forward()[i];
+            int first = split.firstPiece(e);
+            int last = split.firstPiece(e + 1) - 1;
+            for (int k = 0; k <= last - first; k++) {
+                int p = along ? first + k : last - k;
+                if (n == edges.length) {
+                    edges = Arrays.copyOf(edges, 2 * n);
+                    forward = Arrays.copyOf(forward, 2 * n);
+                    service = Arrays.copyOf(service, 2 * n);
+                }
+                edges[n] = p;
+                forward[n] = along;
+                service[n] = tour.service()[i] && demand.either()[p] + (along ? demand.along()[p] : demand.against()[p]) > 0;
+                n++;
+            }
+        }
+        return new Tour(tour.start(), Arrays.copyOf(edges, n), Arrays.copyOf(forward, n), Arrays.copyOf(service, n));
     }
 
     /** The edge's missed parts with short driven gaps between those of the same way closed, sorted by way and start. */

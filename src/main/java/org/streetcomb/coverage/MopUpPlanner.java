@@ -11,15 +11,24 @@ import org.streetcomb.solve.ReachabilityCheck;
 import org.streetcomb.solve.ServiceDemand;
 import org.streetcomb.tour.Tour;
 import org.streetcomb.tour.TourPlanner;
+import org.streetcomb.tour.TourValidator;
 
 /**
  * Plans the mop-up: a tour that services only what an audit found missed, travelling on any street to get
- * there. It is planned on the {@link MissedStretchNetwork}, where each missed stretch of an edge flagged for
+ * there. Its tours run on the {@link MissedStretchNetwork}, where each missed stretch of an edge flagged for
  * mop-up ({@link CoverageReport#mopUp}) is an edge of its own that needs one pass in the way it was missed:
  * either way for a two-way street driven once, the permitted direction of a one-way street, each missing side
  * for both kerbs; the driven rest of the street is road to travel on. This is a rural postman problem;
  * {@link PostmanVariants} picks the solver (undirected, directed or mixed) and {@link TourPlanner} orders and
  * validates the tours.
+ *
+ * <p>Where a stretch ends mid-street, a tour on the pieces may turn back there. Crews in large vehicles
+ * (gritters, sweepers, refuse trucks) cannot turn in the middle of a street, and a turn there is hard to tell
+ * from GPS noise when the drive is audited; so by default the problem is solved on the whole edges (an edge
+ * needs a pass each way one of its stretches does) and each pass is then driven over the pieces, servicing
+ * only the missed ones: the crew drives on to the next junction. The same length as a mop-up of whole edges,
+ * less of it in service. With {@code turnBack} the problem is also solved on the pieces themselves, and the
+ * shorter of the two tours is kept.
  * The tour is closed at the depot, or, from a given start (where the crew is now), open and ends at the
  * depot. Streets in parts of the network not connected to the start get a closed tour each.
  */
@@ -53,16 +62,40 @@ public final class MopUpPlanner {
     private MopUpPlanner() {
     }
 
+    /** Plans a mop-up that drives on to a junction where a missed stretch ends mid-street (see {@link #plan}). */
+    public static MopUp plan(CoverageReport report, int depot, int first, String source) {
+        return plan(report, depot, first, false, source);
+    }
+
     /**
-     * @param depot   the depot node: where the crew returns
-     * @param first   the node the crew starts from: the depot, or where it is now
-     * @param source  the layer's name, for messages
+     * @param depot     the depot node: where the crew returns
+     * @param first     the node the crew starts from: the depot, or where it is now
+     * @param turnBack  whether the crew may turn back where a missed stretch ends mid-street; otherwise it drives
+     *                  on along the street to a junction
+     * @param source    the layer's name, for messages
      * @return the mop-up, or null when nothing needs servicing
      */
-    public static MopUp plan(CoverageReport report, int depot, int first, String source) {
+    public static MopUp plan(CoverageReport report, int depot, int first, boolean turnBack, String source) {
         MissedStretchNetwork stretches = MissedStretchNetwork.of(report);
-        StreetNetwork network = stretches.network();
-        ServiceDemand demand = stretches.demand();
+        MopUp through = solve(report.network(), stretches.wholeEdges(), depot, first, source);
+        if (through == null) {
+            return null;
+        }
+        PostmanProblem problem = new PostmanProblem(stretches.network(), stretches.demand(), through.problem().starts(),
+                depot);
+        List<Tour> expanded = through.tours().stream().map(stretches::expand).toList();
+        validate(problem, expanded);
+        MopUp drivenOn = new MopUp(problem, through.augmentation(), expanded, first, depot);
+        if (!turnBack) {
+            return drivenOn;
+        }
+        // the construction is a heuristic: more freedom does not always give it a shorter tour
+        MopUp turning = solve(stretches.network(), stretches.demand(), depot, first, source);
+        return turning.length() < drivenOn.length() ? turning : drivenOn;
+    }
+
+    /** The rural postman tours for a demand, or null when there is none. */
+    private static MopUp solve(StreetNetwork network, ServiceDemand demand, int depot, int first, String source) {
         boolean any = false;
         for (int e = 0; e < network.edgeCount() && !any; e++) {
             any = demand.needs(e);
@@ -70,15 +103,29 @@ public final class MopUpPlanner {
         if (!any) {
             return null;
         }
-        int end = depot;
         Components components = Components.of(network);
-        if (components.of(first) != components.of(end)) {
+        if (components.of(first) != components.of(depot)) {
             throw new NoTourError(source + ": the start is on a part of the network not connected to the depot's");
         }
         int[] starts = TourPlanner.starts(network, components, demand, first, false);
-        PostmanProblem problem = new PostmanProblem(network, demand, starts, end);
+        PostmanProblem problem = new PostmanProblem(network, demand, starts, depot);
         ReachabilityCheck.check(problem, source);
         Augmentation augmentation = PostmanVariants.solve(problem);
-        return new MopUp(problem, augmentation, TourPlanner.tours(problem, components, augmentation), first, end);
+        return new MopUp(problem, augmentation, TourPlanner.tours(problem, components, augmentation), first, depot);
+    }
+
+    /** Checks the tours driven over the pieces as {@link TourPlanner} checks every tour it makes. */
+    private static void validate(PostmanProblem problem, List<Tour> tours) {
+        StreetNetwork network = problem.network();
+        Components components = Components.of(network);
+        int[][] edgesOf = components.edgesByComponent(network);
+        for (int t = 0; t < tours.size(); t++) {
+            Tour tour = tours.get(t);
+            List<String> problems = TourValidator.problems(network, tour, problem.demand(),
+                    edgesOf[components.of(tour.start())], t == 0 ? problem.end() : tour.start());
+            if (!problems.isEmpty()) {
+                throw new IllegalStateException("invalid mop-up tour from node " + tour.start() + ": " + problems);
+            }
+        }
     }
 }

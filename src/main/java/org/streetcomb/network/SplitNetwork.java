@@ -38,6 +38,20 @@ public record SplitNetwork(StreetNetwork network, int[] parent, double[] start, 
         return b.build();
     }
 
+    /** The first piece of an edge of the original network; its pieces are this id and the ones after it with the same parent. */
+    public int firstPiece(int edge) {
+        int lo = 0, hi = parent.length;
+        while (lo < hi) {
+            int mid = (lo + hi) >>> 1;
+            if (parent[mid] < edge) {
+                lo = mid + 1;
+            } else {
+                hi = mid;
+            }
+        }
+        return lo;
+    }
+
     /** The offsets at least {@link #SHORTEST_PIECE} from the ends and from the offset kept before. */
     private static double[] kept(double[] offsets, double length) {
         if (offsets == null) {
