@@ -2,6 +2,7 @@ package org.streetcomb.report;
 
 import java.time.Instant;
 import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
@@ -12,10 +13,10 @@ import org.streetcomb.read.TrackSegment;
 /**
  * The recorded GPS tracks as a map layer: each segment's fixes joined in the order the receiver wrote
  * them, as they were recorded (before cleaning), so a supervisor sees where the vehicle really went. Fed
- * segment by segment while an audit streams its tracks; it keeps positions only (16 bytes a fix). Above
- * {@value #MOST_FIXES_DRAWN} fixes in all, only every k-th fix (and each segment's last) is drawn, with k
- * the smallest that keeps the total under that number, so a week of tracks still opens quickly; the
- * layer's note states what was drawn.
+ * segment by segment while an audit streams its tracks. It keeps every k-th fix of the whole recording
+ * (and each segment's first and last), doubling k whenever more than {@value #MOST_FIXES_DRAWN} would be
+ * kept, so memory and the page stay bounded however long the tracks are, as the audit's streaming promises;
+ * the layer's note states what was drawn.
  */
 public final class TrackLines implements Consumer<TrackSegment> {
 
@@ -25,17 +26,31 @@ public final class TrackLines implements Consumer<TrackSegment> {
 
     private final List<Recorded> segments = new ArrayList<>();
     private long fixes;
+    private long kept;
+    private long stride = 1;
 
     @Override
     public void accept(TrackSegment segment) {
-        double[] positions = new double[2 * segment.size()];
-        for (int i = 0; i < segment.size(); i++) {
-            positions[2 * i] = segment.lon()[i];
-            positions[2 * i + 1] = segment.lat()[i];
+        int n = segment.size();
+        Recorded recorded = new Recorded(segment.file().getFileName().toString(), segment.place(), n, segment.time()[0],
+                segment.time()[n - 1]);
+        for (int i = 0; i < n; i++) {
+            if (i == 0 || i == n - 1 || (fixes + i) % stride == 0) {
+                recorded.add(segment.lon()[i], segment.lat()[i], fixes + i);
+            }
         }
-        segments.add(new Recorded(segment.file().getFileName().toString(), segment.place(), positions,
-                segment.time()[0], segment.time()[segment.size() - 1]));
-        fixes += segment.size();
+        segments.add(recorded);
+        fixes += n;
+        kept += recorded.size;
+        // more segments than the cap can hold keep only their ends: then doubling would not help
+        while (kept > MOST_FIXES_DRAWN && stride < fixes) {
+            stride *= 2;
+            kept = 0;
+            for (Recorded r : segments) {
+                r.keepEvery(stride);
+                kept += r.size;
+            }
+        }
     }
 
     /** Fixes seen so far. */
@@ -43,23 +58,16 @@ public final class TrackLines implements Consumer<TrackSegment> {
         return fixes;
     }
 
-    /** Every k-th fix is drawn; 1 when all are. */
-    int stride() {
-        return (int) Math.max(1, (fixes + MOST_FIXES_DRAWN - 1) / MOST_FIXES_DRAWN);
-    }
-
     /** The layer, switched off at start (it would hide the streets' colours). */
     MapLayer layer() {
-        int stride = stride();
         List<MapFeature> features = new ArrayList<>();
-        long drawn = 0;
         for (Recorded segment : segments) {
-            double[] line = thinned(segment.positions, stride);
-            drawn += line.length / 2;
+            double[] line = segment.size == 1 ? new double[] {segment.positions[0], segment.positions[1],
+                segment.positions[0], segment.positions[1]} : Arrays.copyOf(segment.positions, 2 * segment.size);
             Map<String, String> details = new LinkedHashMap<>();
             details.put("File", segment.file);
             details.put("Where in the file", segment.place);
-            details.put("Fixes", String.valueOf(segment.positions.length / 2));
+            details.put("Fixes", String.valueOf(segment.fixes));
             if (!Double.isNaN(segment.start)) {
                 details.put("First fix", time(segment.start));
             }
@@ -71,34 +79,14 @@ public final class TrackLines implements Consumer<TrackSegment> {
         String note = stride == 1
                 ? "the fixes as recorded, joined in time order; every fix drawn"
                 : String.format(Locale.ROOT, "the fixes as recorded, joined in time order; every %s fix drawn "
-                        + "(%,d of %,d) to keep the page quick", ordinal(stride), drawn, fixes);
+                        + "(%,d of %,d) to keep the page quick", ordinal(stride), kept, fixes);
         return new MapLayer("tracks", "GPS tracks", note, MapLayer.Kind.LINES, MapStyle.solid(COLOUR, 1.5, 0.7), false,
                 features);
     }
 
-    /** Every {@code stride}-th position and the last, so the line still ends where the segment did. */
-    private static double[] thinned(double[] positions, int stride) {
-        int n = positions.length / 2;
-        if (stride == 1 || n <= 2) {
-            return n == 1 ? new double[] {positions[0], positions[1], positions[0], positions[1]} : positions;
-        }
-        int kept = (n - 1) / stride + 1 + ((n - 1) % stride == 0 ? 0 : 1);
-        double[] out = new double[2 * kept];
-        int k = 0;
-        for (int i = 0; i < n; i += stride) {
-            out[k++] = positions[2 * i];
-            out[k++] = positions[2 * i + 1];
-        }
-        if ((n - 1) % stride != 0) {
-            out[k++] = positions[2 * n - 2];
-            out[k] = positions[2 * n - 1];
-        }
-        return out;
-    }
-
-    private static String ordinal(int n) {
-        int lastTwo = n % 100;
-        String suffix = lastTwo >= 11 && lastTwo <= 13 ? "th" : switch (n % 10) {
+    private static String ordinal(long n) {
+        long lastTwo = n % 100;
+        String suffix = lastTwo >= 11 && lastTwo <= 13 ? "th" : switch ((int) (n % 10)) {
             case 1 -> "st";
             case 2 -> "nd";
             case 3 -> "rd";
@@ -111,7 +99,46 @@ public final class TrackLines implements Consumer<TrackSegment> {
         return Instant.ofEpochMilli(Math.round(seconds * 1000)).toString();
     }
 
-    /** One segment as recorded. */
-    private record Recorded(String file, String place, double[] positions, double start, double end) {
+    /** The fixes kept of one segment: positions and their index in the whole recording. */
+    private static final class Recorded {
+        final String file;
+        final String place;
+        final int fixes;
+        final double start;
+        final double end;
+        double[] positions = new double[16];
+        long[] index = new long[8];
+        int size;
+
+        Recorded(String file, String place, int fixes, double start, double end) {
+            this.file = file;
+            this.place = place;
+            this.fixes = fixes;
+            this.start = start;
+            this.end = end;
+        }
+
+        void add(double lon, double lat, long at) {
+            if (size == index.length) {
+                index = Arrays.copyOf(index, 2 * size);
+                positions = Arrays.copyOf(positions, 4 * size);
+            }
+            positions[2 * size] = lon;
+            positions[2 * size + 1] = lat;
+            index[size++] = at;
+        }
+
+        /** Drops the fixes not on the coarser stride, keeping the segment's first and last. */
+        void keepEvery(long stride) {
+            int k = 0;
+            for (int i = 0; i < size; i++) {
+                if (i == 0 || i == size - 1 || index[i] % stride == 0) {
+                    positions[2 * k] = positions[2 * i];
+                    positions[2 * k + 1] = positions[2 * i + 1];
+                    index[k++] = index[i];
+                }
+            }
+            size = k;
+        }
     }
 }
