@@ -105,8 +105,9 @@ public record SplitNetwork(StreetNetwork network, int[] parent, double[] start, 
             double pieceStart = 0;
             double at = 0;
             int c = 0;
+            int copied = 1;
             point(source.pointLon(e, 0), source.pointLat(e, 0));
-            for (int k = 0; k < count - 1; k++) {
+            for (int k = 0; k < count - 1 && c < cuts.length; k++) {
                 double lon0 = source.pointLon(e, k), lat0 = source.pointLat(e, k);
                 double lon1 = source.pointLon(e, k + 1), lat1 = source.pointLat(e, k + 1);
                 double step = GeodesicLength.between(lon0, lat0, lon1, lat1);
@@ -128,6 +129,10 @@ public record SplitNetwork(StreetNetwork network, int[] parent, double[] start, 
                 }
                 point(lon1, lat1);
                 at += step;
+                copied = k + 2;
+            }
+            for (int k = copied; k < count; k++) {
+                point(source.pointLon(e, k), source.pointLat(e, k));
             }
             piece(e, tail, source.to(e), pieceStart, source.length(e));
         }
