@@ -7,6 +7,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
 import java.util.TreeMap;
+import java.util.stream.IntStream;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.ValueSource;
@@ -14,6 +15,8 @@ import org.streetcomb.network.NearestNode;
 import org.streetcomb.network.NetworkBuilder;
 import org.streetcomb.network.PolylineGeodesics;
 import org.streetcomb.network.StreetNetwork;
+import org.streetcomb.read.RoadFeature;
+import org.streetcomb.read.Travel;
 import org.streetcomb.solve.ServiceDemand;
 import org.streetcomb.tour.Tour;
 import org.streetcomb.tour.TourValidator;
@@ -76,7 +79,7 @@ class MopUpPlannerTest {
     }
 
     private static int[] demanded(StreetNetwork network, ServiceDemand demand) {
-        return java.util.stream.IntStream.range(0, network.edgeCount()).filter(demand::needs).toArray();
+        return IntStream.range(0, network.edgeCount()).filter(demand::needs).toArray();
     }
 
     /**
@@ -175,5 +178,53 @@ class MopUpPlannerTest {
             assertEquals(demand.passes(p), passes[p], "piece " + p + " serviced as often as it needs, by one trip");
         }
         assertEquals(report.missedLength(), serviced(pieces, tours), 1e-6);
+    }
+
+    @Test
+    void oneWayStreetsAndBothKerbsAreServicedOnlyInTheMissedDirection() {
+        List<RoadFeature> lines = new ArrayList<>();
+        for (RoadFeature f : StreetGrid.of(3, 2)) {
+            Travel travel = f.id().equals("h01") ? Travel.FORWARD
+                    : f.id().equals("v01") ? Travel.BACKWARD : f.travel();
+            lines.add(new RoadFeature(f.id(), f.name(), f.line(), travel, true, f.properties()));
+        }
+        StreetNetwork network = new NetworkBuilder(0.5).build(lines);
+        DrivenIntervals driven = new DrivenIntervals(network);
+        for (int e = 0; e < network.edgeCount(); e++) {
+            double length = network.length(e);
+            switch (network.feature(e).id()) {
+                case "h01" -> driven.add(e, true, 0, 40);
+                case "v01" -> driven.add(e, false, 60, length);
+                case "h10" -> {
+                    driven.addWhole(e, true);
+                    driven.add(e, false, 0, 30);
+                    driven.add(e, false, 80, length);
+                }
+                default -> {
+                    driven.addWhole(e, true);
+                    driven.addWhole(e, false);
+                }
+            }
+        }
+        driven.merge();
+        CoverageReport report = StreetCoverageAccounting.account(network, driven, 0.9, true);
+        int depot = NearestNode.of(network, StreetGrid.LON0, StreetGrid.LAT0).node();
+        for (boolean turnBack : new boolean[] {false, true}) {
+            MopUpPlanner.MopUp mopUp = MopUpPlanner.plan(report, depot, depot, turnBack, "grid");
+            StreetNetwork pieces = mopUp.network();
+            ServiceDemand demand = mopUp.problem().demand();
+            Tour tour = mopUp.tours().get(0);
+            assertEquals(List.of(), TourValidator.problems(pieces, tour, demand, demanded(pieces, demand), depot));
+            assertEquals(report.missedLength(), serviced(pieces, mopUp.tours()), 1e-6, "turn back " + turnBack);
+            for (int i = 0; i < tour.steps(); i++) {
+                int p = tour.edges()[i];
+                if (tour.service()[i]) {
+                    String id = pieces.feature(p).id();
+                    // h01 is missed along its one way, v01 against its drawn direction (its one way), h10's against side
+                    assertEquals(id.equals("h01"), tour.forward()[i], id + " serviced in the missed direction");
+                }
+            }
+            assertTrue(mopUp.augmentation().lowerBound() <= mopUp.length() + 1e-6);
+        }
     }
 }
