@@ -5,6 +5,7 @@ import java.util.Arrays;
 import java.util.List;
 import org.streetcomb.network.SplitNetwork;
 import org.streetcomb.network.StreetNetwork;
+import org.streetcomb.read.Travel;
 import org.streetcomb.solve.ServiceDemand;
 import org.streetcomb.tour.Tour;
 
@@ -16,7 +17,8 @@ import org.streetcomb.tour.Tour;
  * with no demand.
  *
  * <p>A driven stretch shorter than {@link #MERGE_GAP} between two missed stretches of the same way, or
- * between a missed stretch and the end of its edge, is serviced with them: the crew is not told to stop and
+ * between a missed stretch and the end of its edge, or a driven edge that short between missed stretches of
+ * its street line, is serviced with them: the crew is not told to stop and
  * restart service for a few metres, and a driven stretch that short is within the reach of GPS noise (two
  * standard deviations of the audit's default 10 m), so it may not have been driven at all. O(edges + missed
  * parts log missed parts).
@@ -45,12 +47,14 @@ public record MissedStretchNetwork(SplitNetwork split, ServiceDemand demand) {
                 byEdge.get(part.edge()).add(part);
             }
         }
-        double[][] cuts = new double[m][];
         List<List<MissedPart>> stretches = new ArrayList<>(m);
         for (int e = 0; e < m; e++) {
-            List<MissedPart> merged = merged(byEdge.get(e), network.length(e));
-            stretches.add(merged);
-            cuts[e] = cuts(merged, network.length(e));
+            stretches.add(merged(byEdge.get(e), network.length(e)));
+        }
+        bridgeShortEdges(report, stretches);
+        double[][] cuts = new double[m][];
+        for (int e = 0; e < m; e++) {
+            cuts[e] = cuts(stretches.get(e), network.length(e));
         }
         SplitNetwork split = SplitNetwork.of(network, cuts);
         int pieces = split.network().edgeCount();
@@ -133,6 +137,49 @@ public record MissedStretchNetwork(SplitNetwork split, ServiceDemand demand) {
             }
         }
         return out;
+    }
+
+    /**
+     * A driven edge shorter than {@link #MERGE_GAP} between two missed stretches of the same street line (a
+     * staggered crossroads, say) is serviced with them, for the reason gaps inside an edge are. Both kerbs of
+     * a two-way street are left as they are: each side has its own stretches.
+     */
+    private static void bridgeShortEdges(CoverageReport report, List<List<MissedPart>> stretches) {
+        StreetNetwork network = report.network();
+        List<MissedPart> bridges = new ArrayList<>();
+        for (int e = 0; e < network.edgeCount(); e++) {
+            Travel travel = network.travel(e);
+            if (!stretches.get(e).isEmpty() || !network.required(e) || network.length(e) >= MERGE_GAP
+                    || report.bothKerbs() && travel == Travel.BOTH) {
+                continue;
+            }
+            MissedPart.Way way = travel == Travel.BOTH ? MissedPart.Way.EITHER
+                    : travel == Travel.FORWARD ? MissedPart.Way.ALONG : MissedPart.Way.AGAINST;
+            if (meets(network, stretches, e, network.from(e), way) && meets(network, stretches, e, network.to(e), way)) {
+                bridges.add(new MissedPart(e, 0, network.length(e), way));
+            }
+        }
+        for (MissedPart bridge : bridges) {
+            stretches.set(bridge.edge(), List.of(bridge));
+        }
+    }
+
+    /** Whether another edge of {@code edge}'s street line has a stretch of this way reaching {@code node}. */
+    private static boolean meets(StreetNetwork network, List<List<MissedPart>> stretches, int edge, int node,
+                                 MissedPart.Way way) {
+        for (int i = network.incidenceStart(node); i < network.incidenceEnd(node); i++) {
+            int f = network.incidentEdge(i);
+            if (f == edge || network.featureIndex(f) != network.featureIndex(edge)) {
+                continue;
+            }
+            for (MissedPart s : stretches.get(f)) {
+                boolean reaches = node == network.from(f) && s.from() == 0 || node == network.to(f) && s.to() == network.length(f);
+                if (reaches && s.way() == way) {
+                    return true;
+                }
+            }
+        }
+        return false;
     }
 
     /** The stretches' ends inside the edge, in increasing order. */

@@ -153,4 +153,45 @@ class MissedStretchNetworkTest {
         MissedStretchNetwork stretches = MissedStretchNetwork.of(audit(network, false, d -> d.add(e, true, 0, length - 30)));
         assertEquals(0, serviced(stretches).size(), "93 % driven is above the 90 % threshold: covered");
     }
+
+    @Test
+    void aShortDrivenBlockBetweenMissedStretchesOfTheSameStreetIsServicedWithThem() {
+        for (double apart : new double[] {15, 30}) {
+            // Long Street crossed by two roads `apart` metres from each other (a staggered crossroads)
+            double east = StreetGrid.LON0 + 0.00505;
+            double x1 = StreetGrid.LON0 + 0.0025;
+            double x2 = x1 + apart / (Math.PI / 180 * 6_378_137 * Math.cos(Math.toRadians(StreetGrid.LAT0)));
+            StreetNetwork network = new NetworkBuilder(0.5).build(List.of(
+                    StreetGrid.line("long", "Long Street", Travel.BOTH, StreetGrid.LON0, StreetGrid.LAT0, east, StreetGrid.LAT0),
+                    StreetGrid.line("x1", "First Cross", Travel.BOTH, x1, StreetGrid.LAT0 - 0.001, x1, StreetGrid.LAT0 + 0.001),
+                    StreetGrid.line("x2", "Second Cross", Travel.BOTH, x2, StreetGrid.LAT0 - 0.001, x2, StreetGrid.LAT0 + 0.001)));
+            DrivenIntervals driven = new DrivenIntervals(network);
+            double longLength = 0;
+            for (int e = 0; e < network.edgeCount(); e++) {
+                boolean isLong = network.feature(e).id().equals("long");
+                longLength += isLong ? network.length(e) : 0;
+                // the crew crossed from one cross road to the other along Long Street, and drove no more of it
+                if (!isLong || network.length(e) < 2 * apart) {
+                    driven.addWhole(e, true);
+                }
+            }
+            driven.merge();
+            MissedStretchNetwork stretches = MissedStretchNetwork.of(StreetCoverageAccounting.account(network, driven, 0.9, false));
+            double service = stretches.demand().length(stretches.network());
+            if (apart < MissedStretchNetwork.MERGE_GAP) {
+                assertEquals(longLength, service, 1e-6, "the 15 m block is serviced with the stretches either side");
+            } else {
+                assertEquals(longLength - PolylineGeodesics.length(network, shortest(network)), service, 1e-6,
+                        "a 30 m block driven stays deadhead");
+            }
+        }
+    }
+
+    private static int shortest(StreetNetwork network) {
+        int best = 0;
+        for (int e = 1; e < network.edgeCount(); e++) {
+            best = network.length(e) < network.length(best) ? e : best;
+        }
+        return best;
+    }
 }
