@@ -34,6 +34,13 @@ public final class Main implements Runnable {
         CommandLine cli = new CommandLine(new Main());
         cli.setOut(out);
         cli.setErr(err);
+        // a mistake on the command line gets one line and a pointer to the help, not the whole option list
+        cli.setParameterExceptionHandler((e, arguments) -> {
+            err.println("streetcomb: " + e.getMessage());
+            CommandLine.UnmatchedArgumentException.printSuggestions(e, err);
+            err.println("Try '" + e.getCommandLine().getCommandSpec().qualifiedName() + " --help' for the options.");
+            return ExitCode.USAGE;
+        });
         cli.setExecutionExceptionHandler((e, commandLine, parseResult) -> {
             if (e instanceof InputError) {
                 err.println("streetcomb: " + e.getMessage());

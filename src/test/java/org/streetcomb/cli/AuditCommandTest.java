@@ -247,6 +247,9 @@ class AuditCommandTest {
         Run odds = run("audit", DEMO, drive.toString(), "--doubt-odds", "0.5");
         assertEquals(ExitCode.USAGE, odds.code());
         assertTrue(odds.err().contains("--doubt-odds must be 1 or more"), odds.err());
+        // a usage mistake is named in one line with a pointer to the help, not the whole option list (common practice)
+        assertEquals(2, odds.err().strip().lines().count(), odds.err());
+        assertTrue(odds.err().contains("streetcomb audit --help"), odds.err());
         assertEquals(ExitCode.USAGE, run("audit", DEMO).code());
     }
 
