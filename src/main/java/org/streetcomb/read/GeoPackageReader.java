@@ -22,7 +22,6 @@ import org.locationtech.jts.geom.MultiLineString;
 import org.locationtech.jts.geom.PrecisionModel;
 import org.locationtech.jts.io.ParseException;
 import org.locationtech.jts.io.WKBReader;
-import org.opengis.referencing.crs.CoordinateReferenceSystem;
 import org.sqlite.SQLiteConfig;
 import org.streetcomb.InputError;
 
@@ -87,8 +86,7 @@ final class GeoPackageReader implements LayerReader {
                     }
                 }
             }
-            Wgs84Transform toWgs84 = Wgs84Transform.to(crs(sql, layer[2], file), extent.getMinX(), extent.getMinY(),
-                    extent.getMaxX(), extent.getMaxY(), options.crs() != null ? "--crs " + options.crs() : file);
+            Wgs84Transform toWgs84 = toWgs84(sql, layer[2], file, extent);
             for (Row row : rows) {
                 List<LineString> lonLat = new ArrayList<>();
                 for (LineString line : row.lines()) {
@@ -145,9 +143,10 @@ final class GeoPackageReader implements LayerReader {
         return null;
     }
 
-    private CoordinateReferenceSystem crs(Statement sql, String srsId, Path file) throws SQLException {
+    private Wgs84Transform toWgs84(Statement sql, String srsId, Path file, Envelope extent) throws SQLException {
         if (options.crs() != null) {
-            return Wgs84Transform.fromOption(options.crs());
+            return Wgs84Transform.forOption(options.crs(), extent.getMinX(), extent.getMinY(), extent.getMaxX(),
+                    extent.getMaxY());
         }
         try (ResultSet rs = sql.executeQuery("SELECT definition FROM gpkg_spatial_ref_sys WHERE srs_id = " + Long.parseLong(srsId))) {
             String wkt = rs.next() ? rs.getString(1) : null;
@@ -155,7 +154,8 @@ final class GeoPackageReader implements LayerReader {
                 throw InputError.at(file, null, "the line layer's srs_id " + srsId + " has no coordinate reference system "
                         + "definition: state it with --crs=EPSG:code (or --crs=FILE holding its WKT)");
             }
-            return Wgs84Transform.fromWkt(wkt, file + ": gpkg_spatial_ref_sys srs_id " + srsId);
+            return Wgs84Transform.forWkt(wkt, file + ": gpkg_spatial_ref_sys srs_id " + srsId, extent.getMinX(),
+                    extent.getMinY(), extent.getMaxX(), extent.getMaxY());
         }
     }
 

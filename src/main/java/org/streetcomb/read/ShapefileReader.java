@@ -18,7 +18,6 @@ import org.locationtech.jts.geom.Coordinate;
 import org.locationtech.jts.geom.GeometryFactory;
 import org.locationtech.jts.geom.LineString;
 import org.locationtech.jts.geom.PrecisionModel;
-import org.opengis.referencing.crs.CoordinateReferenceSystem;
 import org.streetcomb.InputError;
 
 /**
@@ -72,8 +71,7 @@ final class ShapefileReader implements LayerReader {
                 throw InputError.at(sibling(label, ".dbf"), null, "holds " + attributes.recordCount()
                         + " records but the .shp index (.shx) holds " + indexed + ": the files do not belong together");
             }
-            Wgs84Transform toWgs84 = Wgs84Transform.to(crs(prj, label), shapes.minX(), shapes.minY(), shapes.maxX(),
-                    shapes.maxY(), options.crs() != null ? "--crs " + options.crs() : sibling(label, ".prj"));
+            Wgs84Transform toWgs84 = toWgs84(prj, label, shapes.minX(), shapes.minY(), shapes.maxX(), shapes.maxY());
             for (ShpLineReader.Shape shape; (shape = shapes.next()) != null; ) {
                 if (shape.number() > indexed) {
                     break;
@@ -116,16 +114,17 @@ final class ShapefileReader implements LayerReader {
         lines.add(GEOMETRY.createLineString(coords));
     }
 
-    private CoordinateReferenceSystem crs(Path prj, String label) {
+    private Wgs84Transform toWgs84(Path prj, String label, double minX, double minY, double maxX, double maxY) {
         if (options.crs() != null) {
-            return Wgs84Transform.fromOption(options.crs());
+            return Wgs84Transform.forOption(options.crs(), minX, minY, maxX, maxY);
         }
         if (prj == null) {
             throw InputError.at(label, null, "no .prj file says which coordinate reference system the layer uses: "
                     + "state it with --crs=EPSG:code (or --crs=FILE holding its WKT)");
         }
         try {
-            return Wgs84Transform.fromWkt(Files.readString(prj, StandardCharsets.ISO_8859_1), sibling(label, ".prj"));
+            return Wgs84Transform.forWkt(Files.readString(prj, StandardCharsets.ISO_8859_1), sibling(label, ".prj"),
+                    minX, minY, maxX, maxY);
         } catch (IOException e) {
             throw InputError.at(sibling(label, ".prj"), null, "cannot read: " + e.getMessage());
         }

@@ -7,6 +7,7 @@ import java.nio.file.Path;
 import java.util.Locale;
 import java.util.logging.Level;
 import java.util.logging.Logger;
+import java.util.regex.Pattern;
 import org.apache.sis.geometry.GeneralEnvelope;
 import org.apache.sis.metadata.iso.extent.DefaultGeographicBoundingBox;
 import org.apache.sis.referencing.CRS;
@@ -28,7 +29,13 @@ import org.streetcomb.InputError;
  * the source CRS, SIS falls back on a "ballpark" transformation that can be off by hundreds of metres; so
  * an operation whose linear accuracy is unknown or worse than {@link #WORST_ACCURACY_METRES} is refused
  * with a message, never used. ESRI .prj files often name their datum in a way the EPSG data do not
- * recognise (for instance D_North_American_1927): the user then states the CRS by its EPSG code.
+ * recognise (for instance D_North_American_1927): {@link EsriDatumNames} gives the common ones their EPSG
+ * code; for others the user states the CRS by its EPSG code.
+ *
+ * <p>A definition that only restates WGS 84 longitude/latitude (the usual .prj of a GPS-era layer, and
+ * srs_id 4326 in GeoPackages) is recognised from its text and needs no transformation: SIS would spend
+ * seconds starting its EPSG database to reach the same answer. Coordinates are then taken as longitude,
+ * latitude whatever axis order the definition states, as the shapefile and GeoPackage formats store them.
  */
 final class Wgs84Transform {
 
@@ -50,10 +57,43 @@ final class Wgs84Transform {
         this.description = description;
     }
 
+    /** WKT 1 of WGS 84 longitude/latitude, in the OGC and ESRI dialects, with or without authority codes. */
+    private static final Pattern PLAIN_WGS84 = Pattern.compile("GEOGCS\\[\"[^\"]*\","
+            + "DATUM\\[\"(D_)?WGS[ _]?(19)?84\",SPHEROID\\[\"[^\"]*\",6378137(\\.0*)?,298\\.257223563\\d*"
+            + "(,AUTHORITY\\[\"EPSG\",\"7030\"\\])?\\](,AUTHORITY\\[\"EPSG\",\"6326\"\\])?\\],"
+            + "PRIMEM\\[\"GREENWICH\",0(\\.0*)?(,AUTHORITY\\[\"EPSG\",\"8901\"\\])?\\],"
+            + "UNIT\\[\"DEGREE\",0\\.01745329251994\\d*(,AUTHORITY\\[\"EPSG\",\"9122\"\\])?\\]"
+            + "(,AXIS\\[\"[A-Z]+\",[A-Z]+\\])*(,AUTHORITY\\[\"EPSG\",\"4326\"\\])?\\]");
+
+    /**
+     * The transformation for a layer whose CRS is given as WKT (a .prj file or a GeoPackage definition),
+     * for data within the given extent in source coordinates.
+     */
+    static Wgs84Transform forWkt(String wkt, Object file, double minX, double minY, double maxX, double maxY) {
+        String compact = wkt.strip().replaceAll("\\s+(?=(?:[^\"]*\"[^\"]*\")*[^\"]*$)", "").toUpperCase(Locale.ROOT);
+        if (PLAIN_WGS84.matcher(compact).matches()) {
+            return plainLonLat();
+        }
+        return to(fromWkt(wkt, file), minX, minY, maxX, maxY, file);
+    }
+
+    /** The transformation for the CRS the user gave with --crs ("EPSG:code" or a file holding WKT). */
+    static Wgs84Transform forOption(String crs, double minX, double minY, double maxX, double maxY) {
+        String origin = "--crs " + crs;
+        if (crs.strip().equalsIgnoreCase("EPSG:4326")) {
+            return plainLonLat();
+        }
+        return to(fromOption(crs), minX, minY, maxX, maxY, origin);
+    }
+
+    private static Wgs84Transform plainLonLat() {
+        return new Wgs84Transform(null, "WGS 84, to WGS 84 within 0 m");
+    }
+
     /** The CRS of a .prj file's WKT (OGC or ESRI dialect). */
     static CoordinateReferenceSystem fromWkt(String wkt, Object file) {
         try {
-            return CRS.fromWKT(wkt.strip());
+            return CRS.fromWKT(EsriDatumNames.withEpsgCode(wkt.strip()));
         } catch (FactoryException | RuntimeException e) {
             throw InputError.at(file, null, "the coordinate reference system does not parse: " + firstLine(e));
         }
@@ -109,6 +149,9 @@ final class Wgs84Transform {
 
     /** Transforms {@code count} x,y pairs in place to longitude,latitude. */
     void transform(double[] xy, int count) {
+        if (transform == null) {
+            return;
+        }
         try {
             transform.transform(xy, 0, xy, 0, count);
         } catch (TransformException e) {
