@@ -18,17 +18,16 @@ import org.streetcomb.tour.Tour;
  *
  * <p>A driven stretch shorter than {@link #MERGE_GAP} between two missed stretches of the same way, or
  * between a missed stretch and the end of its edge, or a driven edge that short between missed stretches of
- * its street line, is serviced with them: the crew is not told to stop and
- * restart service for a few metres, and a driven stretch that short is within the reach of GPS noise (two
- * standard deviations of the audit's default 10 m), so it may not have been driven at all. O(edges + missed
- * parts log missed parts).
+ * its street line, is serviced with them: the crew is not told to stop and restart service for a few metres,
+ * and a driven stretch that short is within the reach of GPS noise (two standard deviations of the audit's
+ * default 10 m), so it may not have been driven at all. O(edges + missed parts log missed parts).
  *
  * @param split   the cut network, with each piece's parent edge and offsets
  * @param demand  the service passes each piece needs
  */
 public record MissedStretchNetwork(SplitNetwork split, ServiceDemand demand) {
 
-    /** Driven stretches shorter than this (metres) between missed ones, or at an edge's end, are serviced too. */
+    /** Driven stretches shorter than this (metres) between missed ones, or at an edge's end, are serviced with them. */
     public static final double MERGE_GAP = 20;
 
     public StreetNetwork network() {

@@ -37,8 +37,8 @@ public final class MopUpPlanner {
     /**
      * A planned mop-up.
      *
-     * @param problem       what was solved
-     * @param augmentation  the deadhead the solver added and the method that ran
+     * @param problem       the pieces' network and demand, which the tours meet
+     * @param augmentation  the solver's answer (on the whole edges when driving on) and the method that ran
      * @param tours         the tours, the start's first
      * @param start         where the first tour starts
      * @param end           where the first tour ends (the depot)
