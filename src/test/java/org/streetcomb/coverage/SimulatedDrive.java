@@ -18,8 +18,10 @@ import org.streetcomb.tour.Tour;
 
 /**
  * Invented GPS recordings of a drive along planned tours, for tests and benchmarks (simulated data, not a
- * recording): a speed drawn per step, fixes at intervals drawn per fix, independent Gaussian noise east and
- * north, and dropouts during which no fix is written. Seeded, so every run gives the same fixes.
+ * recording): a speed drawn per step, fixes at intervals drawn per fix, Gaussian noise east and north, and
+ * dropouts during which no fix is written. The noise is independent from fix to fix, or, with a noise
+ * memory, a first-order Gauss-Markov process (each fix keeps exp(-dt / memory) of the last fix's error),
+ * as real receivers' errors persist for a while. Seeded, so every run gives the same fixes.
  */
 public final class SimulatedDrive {
 
@@ -32,9 +34,21 @@ public final class SimulatedDrive {
      * @param dropoutEvery    mean seconds between dropouts (0: none)
      * @param minDropout      shortest dropout, seconds
      * @param maxDropout      longest dropout, seconds
+     * @param noiseMemory     correlation time of the noise, seconds (0: independent from fix to fix)
      */
     public record Settings(double minKmh, double maxKmh, double minInterval, double maxInterval, double sigma,
-                    double dropoutEvery, double minDropout, double maxDropout) {
+                    double dropoutEvery, double minDropout, double maxDropout, double noiseMemory) {
+
+        /** Noise independent from fix to fix. */
+        public Settings(double minKmh, double maxKmh, double minInterval, double maxInterval, double sigma,
+                        double dropoutEvery, double minDropout, double maxDropout) {
+            this(minKmh, maxKmh, minInterval, maxInterval, sigma, dropoutEvery, minDropout, maxDropout, 0);
+        }
+
+        public Settings withNoiseMemory(double seconds) {
+            return new Settings(minKmh, maxKmh, minInterval, maxInterval, sigma, dropoutEvery, minDropout, maxDropout,
+                    seconds);
+        }
     }
 
     /** 2026-03-02T07:00:00Z, an invented start of shift. */
@@ -90,6 +104,7 @@ public final class SimulatedDrive {
         List<double[]> fixes = new ArrayList<>();
         int at = 0;
         double dropoutUntil = -1;
+        double east = 0, north = 0, last = start;
         for (double now = start; now <= time[n - 1]; now += s.minInterval() + random.nextDouble() * (s.maxInterval() - s.minInterval())) {
             while (at < n - 2 && time[at + 1] < now) {
                 at++;
@@ -100,8 +115,12 @@ public final class SimulatedDrive {
             if (s.dropoutEvery() > 0 && now > dropoutUntil && random.nextDouble() < s.maxInterval() / s.dropoutEvery()) {
                 dropoutUntil = now + s.minDropout() + random.nextDouble() * (s.maxDropout() - s.minDropout());
             }
-            double east = random.nextGaussian() * s.sigma();
-            double north = random.nextGaussian() * s.sigma();
+            // stationary: the error keeps its spread sigma whatever share of it the next fix keeps
+            double kept = s.noiseMemory() > 0 ? Math.exp(-(now - last) / s.noiseMemory()) : 0;
+            double fresh = Math.sqrt(1 - kept * kept);
+            east = kept * east + fresh * random.nextGaussian() * s.sigma();
+            north = kept * north + fresh * random.nextGaussian() * s.sigma();
+            last = now;
             if (now <= dropoutUntil) {
                 continue;
             }

@@ -30,8 +30,11 @@ class SkippedStreetSimulationTest {
             String.valueOf(MatchSettings.DEFAULT_DOUBT_ODDS)));
     static final double SKIP_SHARE = 0.1;
 
+    /** Correlation time of the simulated noise, seconds (default 0: independent from fix to fix). */
+    static final double NOISE_MEMORY = Double.parseDouble(System.getProperty("coverage.noise-memory", "0"));
+
     static SimulatedDrive.Settings drive(double sigma) {
-        return new SimulatedDrive.Settings(20, 40, 1, 5, sigma, 300, 2, 10);
+        return new SimulatedDrive.Settings(20, 40, 1, 5, sigma, 300, 2, 10).withNoiseMemory(NOISE_MEMORY);
     }
 
     @Test
