@@ -39,6 +39,8 @@ final class ServiceGroups {
         }
         if (problem.starts().length > 0) {
             member[problem.end()] = true;
+            // the walk of an open tour joins its ends itself: they are one group, as if a street ran between them
+            parent[find(parent, problem.starts()[0])] = find(parent, problem.end());
         }
         int[] id = new int[n];
         Arrays.fill(id, -1);
