@@ -89,6 +89,10 @@ public final class LayerOptions {
                     + "instead of length, and summaries report cost beside metres.")
     String costField;
 
+    @Option(names = "--layer", paramLabel = "NAME", order = 116,
+            description = "The line layer (table) to read from a GeoPackage that holds several.")
+    String layer;
+
     @CommandLine.Spec(CommandLine.Spec.Target.MIXEE)
     CommandLine.Model.CommandSpec mixee;
 
@@ -105,7 +109,7 @@ public final class LayerOptions {
         return new ReadOptions(nameField, onewayField,
                 values(onewayForward, d.onewayForward()), values(onewayBackward, d.onewayBackward()),
                 values(onewayBoth, d.onewayBoth()), keep, drop, requiredField, mode, serviceRoads, privateRoads, crs,
-                gradeSeparated || levelField != null, levelField, costField);
+                gradeSeparated || levelField != null, levelField, costField, layer);
     }
 
     private static Set<String> values(List<String> given, Set<String> defaults) {

@@ -60,7 +60,7 @@ final class GeoPackageReader implements LayerReader {
         Properties properties = config.toProperties();
         try (Connection db = DriverManager.getConnection("jdbc:sqlite:" + file.toAbsolutePath(), properties);
              Statement sql = db.createStatement()) {
-            String[] layer = lineLayer(sql, file);
+            String[] layer = lineLayer(sql, file, options.layer());
             String table = layer[0];
             String column = layer[1];
             ReadTally tally = new ReadTally();
@@ -110,8 +110,11 @@ final class GeoPackageReader implements LayerReader {
         }
     }
 
-    /** The line layer's table name, geometry column and srs_id; refuses none or several. */
-    private static String[] lineLayer(Statement sql, Path file) throws SQLException {
+    /**
+     * The line layer's table name, geometry column and srs_id: the one named, or the only one; refuses
+     * none, several without a name, or a name that is not among them.
+     */
+    private static String[] lineLayer(Statement sql, Path file, String wanted) throws SQLException {
         List<String[]> layers = new ArrayList<>();
         try (ResultSet rs = sql.executeQuery("SELECT g.table_name, g.column_name, g.srs_id"
                 + " FROM gpkg_contents c JOIN gpkg_geometry_columns g ON c.table_name = g.table_name"
@@ -124,10 +127,14 @@ final class GeoPackageReader implements LayerReader {
             throw InputError.at(file, null, "not a GeoPackage (no gpkg_contents and gpkg_geometry_columns tables): "
                     + firstLine(e));
         }
+        String names = String.join(", ", layers.stream().map(l -> l[0]).toList());
+        if (wanted != null) {
+            return layers.stream().filter(l -> l[0].equals(wanted)).findFirst().orElseThrow(() -> InputError.at(file, null,
+                    "no line layer named " + wanted + (layers.isEmpty() ? "; the GeoPackage holds none" : "; its line layers: " + names)));
+        }
         if (layers.size() != 1) {
             throw InputError.at(file, null, layers.isEmpty() ? "the GeoPackage holds no line layer"
-                    : "the GeoPackage holds several line layers ("
-                    + String.join(", ", layers.stream().map(l -> l[0]).toList()) + "): copy the road layer into a file of its own");
+                    : "the GeoPackage holds several line layers (" + names + "): name the road layer with --layer");
         }
         return layers.get(0);
     }

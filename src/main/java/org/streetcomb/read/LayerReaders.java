@@ -25,6 +25,10 @@ public final class LayerReaders {
 
     static LayerReader forFile(Path file, ReadOptions options) {
         String name = file.getFileName().toString().toLowerCase(Locale.ROOT);
+        if (options.layer() != null && !name.endsWith(".gpkg")) {
+            throw InputError.at(file, null, "--layer does not apply: it picks a table of a GeoPackage (.gpkg), and this "
+                    + "file holds one layer");
+        }
         if (name.endsWith(".geojson") || name.endsWith(".json")) {
             if (options.crs() != null) {
                 throw InputError.at(file, null, "--crs does not apply: GeoJSON is always WGS84 longitude/latitude (RFC 7946)");

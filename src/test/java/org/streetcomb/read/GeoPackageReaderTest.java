@@ -44,6 +44,27 @@ class GeoPackageReaderTest {
                         .collect(Collectors.toSet()));
     }
 
+    /**
+     * A GeoPackage with two line layers (two parts of the Mesa streets, split by ogr2ogr, see NOTICE):
+     * --layer reads the one named, with the feature count and length ogrinfo gives for that table.
+     */
+    @Test
+    void readsTheNamedLayerOfSeveral() {
+        Path two = Path.of("fixtures/geopackage/mesa-two-layers.gpkg");
+        for (String table : new String[] {"north_part", "south_part"}) {
+            RoadLayer layer = LayerReaders.read(two, ReadOptions.DEFAULTS.withLayer(table));
+            String gdal = Gdal.ogrinfo("-dialect", "SQLite", "-sql", "SELECT COUNT(*) AS n, "
+                    + "SUM(ST_Length(ST_Transform(geom, 4326), 1)) AS metres FROM " + table, two.toString());
+            assertEquals((int) Gdal.number(gdal, "n"), layer.report().featuresRead(), table);
+            assertEquals(Gdal.number(gdal, "metres"), length(layer), 1e-4 * length(layer), table);
+        }
+        Refusals.assertRefused(dir, two, "several line layers (north_part, south_part): name the road layer with --layer");
+        Refusals.assertRefused(dir, two, "no line layer named roads; its line layers: north_part, south_part",
+                "--layer=roads");
+        Refusals.assertRefused(dir, Path.of("fixtures/demo/brackenford.geojson"), "--layer does not apply",
+                "--layer=streets");
+    }
+
     @Test
     void refusesAFileThatIsNotAGeoPackage() throws IOException {
         Path fake = dir.resolve("roads.gpkg");
