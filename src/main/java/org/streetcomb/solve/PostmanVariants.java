@@ -7,8 +7,9 @@ import org.streetcomb.network.StreetNetwork;
  * Picks the postman variant from the network and the demand, and runs it: no one-way street and every
  * street once in any direction → undirected, exact; every service pass with a fixed direction and every
  * street serviced → directed, exact; a subset of streets → the rural postman heuristics; one-way and
- * two-way streets together → the mixed postman heuristic with a lower bound. The method that ran is in
- * the returned {@link Augmentation}.
+ * two-way streets together → the mixed postman heuristic with a lower bound; an open route through parts
+ * that one-way streets join in one direction only → those parts one by one ({@link AreaChainPostman}).
+ * The method that ran is in the returned {@link Augmentation}.
  */
 public final class PostmanVariants {
 
@@ -21,6 +22,12 @@ public final class PostmanVariants {
         boolean oneWay = false;
         for (int e = 0; e < network.edgeCount() && !oneWay; e++) {
             oneWay = network.travel(e).oneWay();
+        }
+        if (oneWay && problem.open()) {
+            OpenRouteOrder.Chain chain = OpenRouteOrder.chain(problem, "the open route");
+            if (chain.order().length > 1) {
+                return AreaChainPostman.solve(problem, chain);
+            }
         }
         boolean everyEdge = coversPlannedParts(problem);
         if (!oneWay && demand.undirected()) {

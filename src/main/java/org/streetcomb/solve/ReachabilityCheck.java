@@ -72,6 +72,7 @@ public final class ReachabilityCheck {
             }
         }
         if (cut == 0) {
+            OpenRouteOrder.check(problem, source);
             return problem;
         }
         List<String> parts = new ArrayList<>();
@@ -84,7 +85,9 @@ public final class ReachabilityCheck {
         }
         if (leaveOut && cut < demanded) {
             warnings.add("left out, as one-way streets cut them off: " + String.join("; ", parts));
-            return new PostmanProblem(network, demand.restrictedTo(keep), problem.starts(), problem.end());
+            PostmanProblem kept = new PostmanProblem(network, demand.restrictedTo(keep), problem.starts(), problem.end());
+            OpenRouteOrder.check(kept, source);
+            return kept;
         }
         String hint = 2 * cut > demanded
                 ? ". Many streets are cut off: the depot or end may itself sit on a one-way street that leads away; "
