@@ -6,9 +6,10 @@ import org.streetcomb.network.StreetNetwork;
 /**
  * Picks the postman variant from the network and the demand, and runs it: no one-way street and every
  * street once in any direction → undirected, exact; every service pass with a fixed direction and every
- * street serviced → directed, exact; a subset of streets → the rural postman heuristics; one-way and
- * two-way streets together → the mixed postman heuristic with a lower bound; an open route through parts
- * that one-way streets join in one direction only → those parts one by one ({@link AreaChainPostman}).
+ * street serviced → directed, exact; a subset of streets → the rural postman heuristics, then a search of
+ * the order of the service passes ({@link ServiceOrderSearch}); one-way and two-way streets together → the
+ * mixed postman heuristic with a lower bound (rural demand: also that search); an open route through
+ * parts that one-way streets join in one direction only → those parts one by one ({@link AreaChainPostman}).
  * The method that ran is in the returned {@link Augmentation}.
  */
 public final class PostmanVariants {
@@ -26,17 +27,20 @@ public final class PostmanVariants {
         if (oneWay && problem.open()) {
             OpenRouteOrder.Chain chain = OpenRouteOrder.chain(problem, "the open route");
             if (chain.order().length > 1) {
-                return AreaChainPostman.solve(problem, chain);
+                return ServiceOrderSearch.improve(problem, AreaChainPostman.solve(problem, chain));
             }
         }
         boolean everyEdge = coversPlannedParts(problem);
         if (!oneWay && demand.undirected()) {
-            return everyEdge ? UndirectedPostman.solve(problem) : UndirectedRuralPostman.solve(problem);
+            return everyEdge ? UndirectedPostman.solve(problem)
+                    : ServiceOrderSearch.improve(problem, UndirectedRuralPostman.solve(problem));
         }
         if (demand.directed()) {
-            return everyEdge ? DirectedPostman.solve(problem) : DirectedRuralPostman.solve(problem);
+            return everyEdge ? DirectedPostman.solve(problem)
+                    : ServiceOrderSearch.improve(problem, DirectedRuralPostman.solve(problem));
         }
-        return MixedPostman.solve(problem);
+        Augmentation mixed = MixedPostman.solve(problem);
+        return everyEdge ? mixed : ServiceOrderSearch.improve(problem, mixed);
     }
 
     /** Whether every street of every part that gets a tour has service demand. */

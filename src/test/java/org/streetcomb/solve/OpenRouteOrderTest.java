@@ -4,18 +4,12 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.ArrayDeque;
-import java.util.ArrayList;
-import java.util.List;
-import java.util.Map;
 import java.util.Random;
 import org.junit.jupiter.api.Test;
-import org.locationtech.jts.geom.Coordinate;
-import org.locationtech.jts.geom.GeometryFactory;
 import org.streetcomb.NoTourError;
 import org.streetcomb.network.Components;
 import org.streetcomb.network.NetworkBuilder;
 import org.streetcomb.network.StreetNetwork;
-import org.streetcomb.read.RoadFeature;
 import org.streetcomb.read.Travel;
 import org.streetcomb.tour.TourPlanner;
 
@@ -28,14 +22,12 @@ import org.streetcomb.tour.TourPlanner;
  */
 class OpenRouteOrderTest {
 
-    private static final GeometryFactory GEOMETRY = new GeometryFactory();
-
     @Test
     void agreesWithAnExhaustiveSearchOfWalks() {
         int feasible = 0, refused = 0;
         for (int seed = 0; seed < 400; seed++) {
             Random random = new Random(seed);
-            StreetNetwork network = new NetworkBuilder(0.5).build(grid(4, 3, random));
+            StreetNetwork network = new NetworkBuilder(0.5).build(ExhaustiveWalk.grid(4, 3, 0.34, random));
             boolean[] required = new boolean[network.edgeCount()];
             int count = 0;
             for (int e = 0; e < required.length; e++) {
@@ -68,7 +60,7 @@ class OpenRouteOrderTest {
                 // the solver finds a route wherever one exists; TourPlanner validates it
                 Augmentation plan = PostmanVariants.solve(problem);
                 TourPlanner.tours(problem, parts, plan);
-                double optimum = shortestRoute(network, required, start, end);
+                double optimum = ExhaustiveWalk.shortest(network, required, start, end);
                 double ours = plan.traversals().length(network);
                 assertTrue(ours >= optimum - 1e-6 && plan.lowerBound() <= optimum + 1e-6, "seed " + seed);
                 feasible++;
@@ -112,72 +104,5 @@ class OpenRouteOrderTest {
             }
         }
         return false;
-    }
-
-    /** Exhaustive: the length of the shortest such walk (Dijkstra over node and streets serviced so far). */
-    private static double shortestRoute(StreetNetwork network, boolean[] required, int start, int end) {
-        int[] bit = new int[network.edgeCount()];
-        int bits = 0;
-        for (int e = 0; e < bit.length; e++) {
-            bit[e] = required[e] ? 1 << bits++ : 0;
-        }
-        int full = (1 << bits) - 1;
-        double[][] best = new double[network.nodeCount()][1 << bits];
-        for (double[] row : best) {
-            java.util.Arrays.fill(row, Double.POSITIVE_INFINITY);
-        }
-        java.util.PriorityQueue<double[]> queue = new java.util.PriorityQueue<>((x, y) -> Double.compare(x[0], y[0]));
-        best[start][0] = 0;
-        queue.add(new double[] {0, start, 0});
-        while (!queue.isEmpty()) {
-            double[] s = queue.poll();
-            int v = (int) s[1], mask = (int) s[2];
-            if (s[0] > best[v][mask]) {
-                continue;
-            }
-            if (v == end && mask == full) {
-                return s[0];
-            }
-            for (int i = network.incidenceStart(v); i < network.incidenceEnd(v); i++) {
-                int e = network.incidentEdge(i);
-                boolean forward = network.from(e) == v;
-                Travel travel = network.travel(e);
-                if (forward ? travel == Travel.BACKWARD : travel == Travel.FORWARD) {
-                    continue;
-                }
-                int w = network.other(e, v);
-                int next = mask | bit[e];
-                double d = s[0] + network.length(e);
-                if (d < best[w][next]) {
-                    best[w][next] = d;
-                    queue.add(new double[] {d, w, next});
-                }
-            }
-        }
-        return Double.POSITIVE_INFINITY;
-    }
-
-    /** Block sides of a grid about 100 m square, a third of them one-way in a random direction. */
-    private static List<RoadFeature> grid(int columns, int rows, Random random) {
-        List<RoadFeature> lines = new ArrayList<>();
-        for (int r = 0; r < rows; r++) {
-            for (int c = 0; c < columns; c++) {
-                if (c + 1 < columns) {
-                    lines.add(line("h" + r + c, random, c, r, c + 1, r));
-                }
-                if (r + 1 < rows) {
-                    lines.add(line("v" + r + c, random, c, r, c, r + 1));
-                }
-            }
-        }
-        return lines;
-    }
-
-    private static RoadFeature line(String id, Random random, int c0, int r0, int c1, int r1) {
-        double u = random.nextDouble();
-        Travel travel = u < 0.17 ? Travel.FORWARD : u < 0.34 ? Travel.BACKWARD : Travel.BOTH;
-        Coordinate[] c = {new Coordinate(-31.2 + 0.0013 * c0, 44.6 + 0.0009 * r0),
-            new Coordinate(-31.2 + 0.0013 * c1, 44.6 + 0.0009 * r1)};
-        return new RoadFeature(id, id, GEOMETRY.createLineString(c), travel, true, Map.of());
     }
 }
