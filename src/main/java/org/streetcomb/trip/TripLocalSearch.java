@@ -25,12 +25,24 @@ final class TripLocalSearch {
     private final int depot;
     private final TripLimit limit;
     private final int[][] neighbours;
+    /** Cost charged per unit of use beyond the limit, or infinity when trips must fit. */
+    private final double penalty;
     private final List<int[]> trips = new ArrayList<>();
     private final List<double[]> totals = new ArrayList<>();
     private final int[] tripOf;
     private final int[] positionOf;
 
     TripLocalSearch(Tasks tasks, Distances distances, int depot, TripLimit limit, int[][] neighbours) {
+        this(tasks, distances, depot, limit, neighbours, Double.POSITIVE_INFINITY);
+    }
+
+    /**
+     * A search that may overfill trips at a price per unit of use beyond the limit (penalised capacity,
+     * as in Beullens, Muyldermans, Cattrysse &amp; Van Oudheusden, EJOR 147, 2003, and Vidal's hybrid
+     * genetic search), so tasks can pass through a full trip on their way to a better place.
+     */
+    TripLocalSearch(Tasks tasks, Distances distances, int depot, TripLimit limit, int[][] neighbours, double penalty) {
+        this.penalty = penalty;
         this.tasks = tasks;
         this.distances = distances;
         this.depot = depot;
@@ -184,12 +196,13 @@ final class TripLocalSearch {
     private boolean replace(int a, int[] first, int b, int[] second) {
         double[] newFirst = totals(first);
         double[] newSecond = second == null ? null : totals(second);
-        double before = totals.get(a)[0] + (b >= 0 ? totals.get(b)[0] : 0);
-        double after = (first.length == 0 ? 0 : newFirst[0]) + (second == null || second.length == 0 ? 0 : newSecond[0]);
+        double before = priced(totals.get(a)) + (b >= 0 ? priced(totals.get(b)) : 0);
+        double after = (first.length == 0 ? 0 : priced(newFirst)) + (second == null || second.length == 0 ? 0 : priced(newSecond));
         if (after >= before - EPSILON) {
             return false;
         }
-        if ((first.length > 0 && !fits(newFirst)) || (second != null && second.length > 0 && !fits(newSecond))) {
+        if (penalty == Double.POSITIVE_INFINITY
+                && ((first.length > 0 && !fits(newFirst)) || (second != null && second.length > 0 && !fits(newSecond)))) {
             return false;
         }
         trips.set(a, first);
@@ -241,6 +254,14 @@ final class TripLocalSearch {
         }
         cost += distances.between(at, depot);
         return new double[] {cost, service, demand};
+    }
+
+    /** A trip's cost plus the penalty for what it uses beyond the limit. */
+    private double priced(double[] total) {
+        if (penalty == Double.POSITIVE_INFINITY) {
+            return total[0];
+        }
+        return total[0] + penalty * Math.max(0, limit.use(total[1], total[0] - total[1], total[2]) - limit.max());
     }
 
     private boolean fits(double[] total) {

@@ -4,6 +4,7 @@ import java.util.ArrayList;
 import java.util.BitSet;
 import java.util.List;
 import java.util.Random;
+import java.util.function.Supplier;
 import org.streetcomb.network.DijkstraSearch;
 import org.streetcomb.network.Heading;
 import org.streetcomb.network.StreetNetwork;
@@ -17,10 +18,11 @@ import org.streetcomb.tour.TourValidator;
  *
  * <p>Route first, cluster second: the tour's order of services is the first giant tour, cut optimally by
  * {@link GiantTourSplit} (or {@link MinMaxSplit} for k vehicles), then improved by
- * {@link TripLocalSearch}; the improved trips, joined end to end, are cut again while that helps. Further
- * giant tours, treated the same way, are drawn alternately by a randomised nearest-task rule and by
- * shaking the best solution's giant tour (iterated local search), seeded so runs repeat exactly; the
- * cheapest result wins. Trips are driven between services by shortest paths, a street driven
+ * {@link TripLocalSearch}, first letting trips overfill at a price and cutting the result again (which
+ * restores the limit), then within the limit; the improved trips, joined end to end, are cut again while
+ * that helps. That decoder drives a {@link MemeticSearch} over giant tours (Lacomme, Prins &amp;
+ * Ramdane-Chérif 2004) whose first population is the tour's order and giant tours drawn alternately by a
+ * randomised nearest-task rule and at random, seeded so runs repeat exactly; the cheapest result wins. Trips are driven between services by shortest paths, a street driven
  * twice in one trip is serviced on the first pass ({@link EarliestService}), and every trip is checked by
  * {@link TourValidator}. Local improvement needs a distance table over the task ends
  * ({@link NodeDistances}); on networks whose tasks have more ends than it holds, the tour is only cut.
@@ -30,7 +32,8 @@ public final class TripPlanner {
     /**
      * @param limit    what one trip may use; for k vehicles, the measure that is balanced
      * @param vehicles k for the min-max cut into at most k trips, or 0 to cut by the limit alone
-     * @param restarts further randomised giant tours to try
+     * @param restarts search effort: 0 only cuts and improves the tour's order; each unit breeds
+     *                 {@link #CHILDREN_PER_RESTART} children of the memetic search
      * @param seed     seed of the randomised giant tours
      */
     public record Settings(TripLimit limit, int vehicles, int restarts, long seed) {
@@ -47,6 +50,15 @@ public final class TripPlanner {
             return trips.stream().mapToDouble(Trip::length).sum();
         }
     }
+
+    /** Children the memetic search breeds per unit of {@link Settings#restarts()}. */
+    static final int CHILDREN_PER_RESTART = 25;
+
+    /**
+     * Price of overfilling a trip in the penalised local search, relative to the solution's cost per unit of
+     * use (0.25 to 4 were tried on the benchmark sets; 0.5 did best on val, see docs/quality.md).
+     */
+    static final double PENALTY = 0.5;
 
     private final StreetNetwork network;
     private final int depot;
@@ -79,19 +91,15 @@ public final class TripPlanner {
         Distances distances = improve ? NodeDistances.among(network, ends) : new LazyDistances(network, depot);
         int[][] neighbours = improve ? TripLocalSearch.neighbours(tasks, distances) : null;
         List<int[]> best = solve(tasks, distances, neighbours, order, improve);
-        if (improve) {
+        if (improve && settings.restarts() > 0) {
             TripLocalSearch measure = new TripLocalSearch(tasks, distances, depot, settings.limit(), neighbours);
             Random random = new Random(settings.seed());
-            double bestScore = score(tasks, distances, best, measure);
-            for (int r = 0; r < settings.restarts(); r++) {
-                int[] giant = r % 4 == 0 ? nearestTaskOrder(tasks, distances, random) : perturbed(concatenate(best), random);
-                List<int[]> candidate = solve(tasks, distances, neighbours, giant, true);
-                double score = score(tasks, distances, candidate, measure);
-                if (score < bestScore - 1e-7) {
-                    best = candidate;
-                    bestScore = score;
-                }
-            }
+            int[] drawn = {0};
+            Supplier<int[]> orders = () -> drawn[0]++ % 2 == 0 ? nearestTaskOrder(tasks, distances, random)
+                    : shuffled(tasks.size(), random);
+            best = new MemeticSearch((giant, improveIt) -> solve(tasks, distances, neighbours, giant, improveIt),
+                    trips -> score(tasks, distances, trips, measure), random)
+                    .run(best, orders, settings.restarts() * CHILDREN_PER_RESTART);
         }
         return new Result(trips(tasks, best), improve, tasks.size());
     }
@@ -126,6 +134,11 @@ public final class TripPlanner {
                     longest(tasks, distances, trips));
         }
         TripLocalSearch search = new TripLocalSearch(tasks, distances, depot, bound, neighbours);
+        if (settings.vehicles() == 0) {
+            double perUse = search.cost(trips) / Math.max(1e-9, totalUse(tasks, distances, trips));
+            List<int[]> loose = new TripLocalSearch(tasks, distances, depot, bound, neighbours, PENALTY * perUse).improve(trips);
+            trips = cut(tasks, distances, concatenate(loose)).trips();
+        }
         double cost = search.cost(trips);
         while (true) {
             List<int[]> improved = search.improve(trips);
@@ -143,13 +156,22 @@ public final class TripPlanner {
         }
     }
 
+    private double totalUse(Tasks tasks, Distances distances, List<int[]> trips) {
+        double use = 0;
+        for (int[] trip : trips) {
+            double[] t = TripLocalSearch.totals(tasks, distances, depot, trip);
+            use += settings.limit().use(t[1], t[0] - t[1], t[2]);
+        }
+        return use;
+    }
+
     private GiantTourSplit.Result cut(Tasks tasks, Distances distances, int[] order) {
         return settings.vehicles() > 0
                 ? MinMaxSplit.split(tasks, distances, depot, settings.limit(), settings.vehicles(), order)
                 : GiantTourSplit.split(tasks, distances, depot, settings.limit(), order);
     }
 
-    private static int[] concatenate(List<int[]> trips) {
+    static int[] concatenate(List<int[]> trips) {
         return trips.stream().flatMapToInt(java.util.Arrays::stream).map(ref -> ref >> 1).toArray();
     }
 
@@ -189,34 +211,15 @@ public final class TripPlanner {
         return order;
     }
 
-    /**
-     * The best solution's giant tour shaken: a few runs of it reversed or moved elsewhere, so the next cut
-     * and improvement search near it (iterated local search).
-     */
-    private static int[] perturbed(int[] order, Random random) {
-        int n = order.length;
-        int[] result = order.clone();
-        if (n < 4) {
-            return result;
+    /** A random giant tour (Fisher-Yates shuffle). */
+    private static int[] shuffled(int n, Random random) {
+        int[] order = new int[n];
+        for (int i = 0; i < n; i++) {
+            int j = random.nextInt(i + 1);
+            order[i] = order[j];
+            order[j] = i;
         }
-        for (int k = 0; k < 3; k++) {
-            int i = random.nextInt(n);
-            int j = random.nextInt(n);
-            int from = Math.min(i, j);
-            int to = Math.max(i, j);
-            if (random.nextBoolean()) {
-                for (int a = from, b = to; a < b; a++, b--) {
-                    int t = result[a];
-                    result[a] = result[b];
-                    result[b] = t;
-                }
-            } else {
-                int t = result[from];
-                System.arraycopy(result, from + 1, result, from, to - from);
-                result[to] = t;
-            }
-        }
-        return result;
+        return order;
     }
 
     private int[] withDepot(int[] ends) {
@@ -225,28 +228,35 @@ public final class TripPlanner {
         return java.util.Arrays.stream(all).distinct().sorted().toArray();
     }
 
-    /** The trips as tours: shortest paths between the services, every trip checked. */
+    /**
+     * The trips as tours: shortest paths between the services, every trip checked. Where a path between
+     * services drives a street the trip services later, that street is serviced on the first pass
+     * ({@link EarliestService}) and the trip is driven again between its services in their new order,
+     * while that shortens it.
+     */
     private List<Trip> trips(Tasks tasks, List<int[]> refs) {
         DijkstraSearch search = new DijkstraSearch(network, Heading.OUTBOUND);
         List<Trip> trips = new ArrayList<>();
         for (int[] trip : refs) {
-            List<int[]> steps = new ArrayList<>();
-            int at = depot;
+            int[][] services = new int[trip.length][];
             double service = 0;
             double demand = 0;
             int[] mustCover = new int[trip.length];
             for (int k = 0; k < trip.length; k++) {
                 int ref = trip[k];
-                at = connect(search, at, tasks.start(ref), steps);
-                int e = tasks.edge[ref >> 1];
-                steps.add(new int[] {e, network.from(e) == tasks.start(ref) ? 1 : 0, 1});
-                at = tasks.end(ref);
+                services[k] = new int[] {tasks.edge[ref >> 1], tasks.start(ref), tasks.end(ref)};
                 service += tasks.cost(ref);
                 demand += tasks.demand(ref);
-                mustCover[k] = e;
+                mustCover[k] = services[k][0];
             }
-            connect(search, at, depot, steps);
-            Tour tour = EarliestService.of(toTour(steps));
+            Tour tour = EarliestService.of(drive(search, services));
+            while (true) {
+                Tour again = EarliestService.of(drive(search, servicesOf(tour)));
+                if (again.length(network) >= tour.length(network) - 1e-9) {
+                    break;
+                }
+                tour = again;
+            }
             List<String> problems = TourValidator.problems(network, tour, mustCover);
             if (!problems.isEmpty()) {
                 throw new IllegalStateException("invalid trip: " + problems);
@@ -256,6 +266,30 @@ public final class TripPlanner {
             trips.add(new Trip(tour, length, service, demand, over));
         }
         return trips;
+    }
+
+    /** The services of a tour in driving order, each as {edge, entry node, exit node}. */
+    private int[][] servicesOf(Tour tour) {
+        List<int[]> services = new ArrayList<>();
+        for (int i = 0; i < tour.steps(); i++) {
+            if (tour.service()[i]) {
+                services.add(new int[] {tour.edges()[i], tour.entry(network, i), tour.exit(network, i)});
+            }
+        }
+        return services.toArray(int[][]::new);
+    }
+
+    /** A walk from the depot through the services in order, by shortest paths, and back. */
+    private Tour drive(DijkstraSearch search, int[][] services) {
+        List<int[]> steps = new ArrayList<>();
+        int at = depot;
+        for (int[] s : services) {
+            at = connect(search, at, s[1], steps);
+            steps.add(new int[] {s[0], network.from(s[0]) == s[1] ? 1 : 0, 1});
+            at = s[2];
+        }
+        connect(search, at, depot, steps);
+        return toTour(steps);
     }
 
     private int connect(DijkstraSearch search, int from, int to, List<int[]> steps) {
