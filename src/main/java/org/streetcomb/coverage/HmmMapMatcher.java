@@ -20,14 +20,17 @@ import org.streetcomb.read.TrackSegment;
  * of the two states, log p = -|d_line - d_route| / beta. For timed fixes after a gap (a dropout) the vehicle
  * may have driven farther than the straight line, into a close and back, say: routes up to the distance
  * its recent speed covers in the gap are not charged (an addition to the published model, which is the
- * special case of no gap). The route leaves the first state's edge in its
- * direction, follows the shortest path, and enters the second state's edge in its direction, so turning
- * back in the middle of a street costs the way round. Staying on one edge in one direction is a direct
- * move charged for its signed step, so the backward steps of noise cost little and steady backward motion
- * loses to the other direction. Turning back onto the same edge at a node where the street goes on costs
+ * special case of no gap). A move between two edges leaves the first state's edge in its direction,
+ * follows the shortest path and enters the second state's edge in its direction. Staying on one edge in
+ * one direction is charged for its signed step, so the backward steps of noise cost little and steady
+ * backward motion loses to the other direction. Turning back at a node where the street goes on costs
  * {@value #U_TURN} m more (an addition to the published model: noise makes such turns look cheap, crews
- * rarely make them, and without it a turning loop is read as a turn at its mouth). Routes are bounded by the gap limit and, for timed fixes, by the speed limit; where
- * no route is believable the match is split and nothing is credited across the split, as Newson &amp; Krumm
+ * rarely make them, and without it a turning loop is read as a turn at its mouth), and in the middle of
+ * an edge (at roadworks, say) {@value #MID_STREET_TURN} m more; such a turn is placed at the farther of
+ * the two fixes' positions, so only the stretch the fixes show is credited, and is not considered where
+ * the edge leads to a dead end or a turning pocket, where crews drive to the end. Routes are bounded by
+ * the gap limit and, for timed fixes, by the speed limit; where no route is believable the match is
+ * split and nothing is credited across the split, as Newson &amp; Krumm
  * break the chain where the HMM cannot continue.
  *
  * <p>What is credited: not only the most probable drive (Newson &amp; Krumm's Viterbi path) but every move
@@ -48,8 +51,15 @@ public final class HmmMapMatcher {
     private static final double PACE_WEIGHT = 0.2;
     /** Log-probability lost to rounding when a chain's score is summed forward and taken apart backward. */
     private static final double ROUNDING = 1e-6;
+    /** How a move went: on along one edge, turning back on one edge, or through the nodes. */
+    private static final byte ON = 0, TURN = 1, VIA = 2;
     /** Extra route metres charged for turning back at a node where the street goes on. */
     static final double U_TURN = 50;
+    /**
+     * Extra route metres charged for turning back in the middle of an edge: more than at a node, where a
+     * side street helps the turn, so fixes that stop short of a junction read as a turn at the junction.
+     */
+    static final double MID_STREET_TURN = 2 * U_TURN;
 
     private final StreetNetwork network;
     private final StreetIndex index;
@@ -57,13 +67,19 @@ public final class HmmMapMatcher {
     private final MatchSettings settings;
     private final DijkstraSearch search;
     private final int[] entryStamp;
+    private final boolean[] pocketNodes;
     private final Moves scratch = new Moves(256);
     private int stamp;
     /** Recent speed of the vehicle, metres per second (0 until known): a smoothed mean over matched moves. */
     private double pace;
 
-    public HmmMapMatcher(StreetNetwork network, StreetIndex index, MatchSettings settings) {
+    /**
+     * @param pocketNodes nodes on a turning pocket ({@link TurningPockets}): a crew heading for one drives
+     *                    on to it and turns there, not in the street before it
+     */
+    public HmmMapMatcher(StreetNetwork network, StreetIndex index, MatchSettings settings, boolean[] pocketNodes) {
         this.network = network;
+        this.pocketNodes = pocketNodes;
         this.index = index;
         this.frame = index.frame();
         this.settings = settings;
@@ -190,13 +206,16 @@ public final class HmmMapMatcher {
         double viaCost = via <= limit
                 ? deviation(via, line, reach) + (uTurn(a, k, b, j, nodeDistance) ? U_TURN : 0) : Double.POSITIVE_INFINITY;
         double step = step(a, k, b, j);
-        double directCost = Math.abs(step) <= limit ? deviation(step, line, reach) : Double.POSITIVE_INFINITY;
-        double cost = Math.min(viaCost, directCost);
+        double onCost = Math.abs(step) <= limit ? deviation(step, line, reach) : Double.POSITIVE_INFINITY;
+        double turn = a.edge[k] == b.edge[j] && a.along[k] != b.along[j] && goesOn(exit(a, k))
+                ? Math.abs(a.offset[k] - b.offset[j]) : Double.NaN;
+        double turnCost = turn <= limit ? deviation(turn, line, reach) + MID_STREET_TURN : Double.POSITIVE_INFINITY;
+        double cost = Math.min(viaCost, Math.min(onCost, turnCost));
         if (cost == Double.POSITIVE_INFINITY) {
             return;
         }
         double score = a.score[k] - cost / settings.beta() + b.emission[j];
-        scratch.add(k, j, score, directCost <= viaCost);
+        scratch.add(k, j, score, cost == onCost ? ON : cost == turnCost ? TURN : VIA);
         b.score[j] = Math.max(b.score[j], score);
     }
 
@@ -220,6 +239,11 @@ public final class HmmMapMatcher {
     private boolean uTurn(Layer a, int i, Layer b, int j, double nodeDistance) {
         return a.edge[i] == b.edge[j] && a.along[i] != b.along[j] && nodeDistance == 0
                 && network.degree(exit(a, i)) > 1;
+    }
+
+    /** Whether the street goes on beyond {@code node}: not a dead end, nor the way into a turning pocket. */
+    private boolean goesOn(int node) {
+        return network.degree(node) > 1 && !pocketNodes[node];
     }
 
     /** The longest believable route between two fixes. */
@@ -298,16 +322,23 @@ public final class HmmMapMatcher {
             Moves moves = b.moves;
             for (int m = 0; m < moves.size; m++) {
                 if (moves.score[m] + rest[k][moves.to[m]] >= best - settings.margin() - ROUNDING) {
-                    credit(chain.get(k - 1), moves.from[m], b, moves.to[m], moves.direct[m], driven);
+                    credit(chain.get(k - 1), moves.from[m], b, moves.to[m], moves.kind[m], driven);
                 }
             }
         }
     }
 
-    /** Records the stretch from state i of a to state j of b, along one edge or through the nodes. */
-    private void credit(Layer a, int i, Layer b, int j, boolean direct, DrivenIntervals driven) {
-        if (direct) {
+    /** Records the stretch from state i of a to state j of b, by the way the move went. */
+    private void credit(Layer a, int i, Layer b, int j, byte how, DrivenIntervals driven) {
+        if (how == ON) {
             driven.add(a.edge[i], a.along[i], a.offset[i], b.offset[j]);
+            return;
+        }
+        if (how == TURN) {
+            // on to the farther of the two positions in a's direction, and back
+            double turn = a.along[i] ? Math.max(a.offset[i], b.offset[j]) : Math.min(a.offset[i], b.offset[j]);
+            driven.add(a.edge[i], a.along[i], a.offset[i], turn);
+            driven.add(b.edge[j], b.along[j], turn, b.offset[j]);
             return;
         }
         int exit = exit(a, i);

@@ -4,8 +4,8 @@ import java.util.Arrays;
 
 /**
  * The scored moves from the states of one fix to the states of the next, in primitive arrays: for each,
- * the two states, the log-probability of the best drive that ends with it, and whether it stayed on one
- * edge (else it went through the nodes). A scratch list collects every believable move of a step;
+ * the two states, the log-probability of the best drive that ends with it, and how it went: on along one
+ * edge, turning back on one edge, or through the nodes. A scratch list collects every believable move of a step;
  * {@link #within} keeps only those a drive within the margin of the best could use.
  */
 final class Moves {
@@ -16,31 +16,31 @@ final class Moves {
     int[] from;
     int[] to;
     double[] score;
-    boolean[] direct;
+    byte[] kind;
 
     Moves(int capacity) {
         from = new int[capacity];
         to = new int[capacity];
         score = new double[capacity];
-        direct = new boolean[capacity];
+        kind = new byte[capacity];
     }
 
     void clear() {
         size = 0;
     }
 
-    void add(int fromState, int toState, double moveScore, boolean stayed) {
+    void add(int fromState, int toState, double moveScore, byte how) {
         if (size == from.length) {
             int grown = Math.max(16, 2 * size);
             from = Arrays.copyOf(from, grown);
             to = Arrays.copyOf(to, grown);
             score = Arrays.copyOf(score, grown);
-            direct = Arrays.copyOf(direct, grown);
+            kind = Arrays.copyOf(kind, grown);
         }
         from[size] = fromState;
         to[size] = toState;
         score[size] = moveScore;
-        direct[size] = stayed;
+        kind[size] = how;
         size++;
     }
 
@@ -53,7 +53,7 @@ final class Moves {
         Moves kept = new Moves(0);
         for (int m = 0; m < size; m++) {
             if (score[m] >= best[to[m]] - margin) {
-                kept.add(from[m], to[m], score[m], direct[m]);
+                kept.add(from[m], to[m], score[m], kind[m]);
             }
         }
         return kept;

@@ -26,8 +26,8 @@ public final class TrackCoverage {
         this.network = network;
         this.cleaner = new TrackCleaner(settings.sigma(), settings.maxSpeed());
         StreetIndex index = new StreetIndex(network);
-        this.matcher = new HmmMapMatcher(network, index, settings);
         this.pockets = TurningPockets.of(network, index.frame(), POCKET_SIGMAS * settings.sigma());
+        this.matcher = new HmmMapMatcher(network, index, settings, TurningPockets.nodes(network, pockets));
         this.driven = new DrivenIntervals(network);
     }
 

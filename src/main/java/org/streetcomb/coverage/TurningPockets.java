@@ -28,6 +28,18 @@ final class TurningPockets {
     private TurningPockets() {
     }
 
+    /** Whether each node lies on a pocket: a street that reaches one ends there, as far as a crew turning is concerned. */
+    static boolean[] nodes(StreetNetwork network, List<int[]> pockets) {
+        boolean[] on = new boolean[network.nodeCount()];
+        for (int[] pocket : pockets) {
+            for (int e : pocket) {
+                on[network.from(e)] = true;
+                on[network.to(e)] = true;
+            }
+        }
+        return on;
+    }
+
     /** The edge sets of the pockets of {@code network} that fit in a square of side {@code size} metres. */
     static List<int[]> of(StreetNetwork network, LocalFrame frame, double size) {
         List<int[]> pockets = new ArrayList<>();
