@@ -20,7 +20,8 @@ import org.streetcomb.write.AtomicFile;
  * Draws a {@link MapReport} as a PNG of a stated pixel size with Java2D, for terminals, e-mail and CI
  * artefacts: the layers that the HTML report shows at start, in the same colours and widths, under a title
  * band, with a legend (the groups too, such as each trip's colour, when there are a few), a scale bar and
- * the cautions that fit. Web Mercator, north up, fitted to the layers.
+ * the cautions that fit. Web Mercator, north up, fitted to the layers beside or above the legend, whichever
+ * leaves the larger scale, so the legend never hides a street.
  */
 public final class QuickLookPng {
 
@@ -30,6 +31,7 @@ public final class QuickLookPng {
     private static final int MARGIN = 16;
     /** Groups (tours, trips) are listed in the legend when there are at most this many. */
     private static final int LEGEND_GROUPS = 12;
+    private static final Font LEGEND_FONT = new Font(Font.SANS_SERIF, Font.PLAIN, 11);
 
     private final int width;
     private final int height;
@@ -98,7 +100,48 @@ public final class QuickLookPng {
         if (bounds[0] > bounds[2]) {
             return null;
         }
-        return new PixelFrame(bounds, MARGIN, HEADER + MARGIN, width - 2.0 * MARGIN, height - HEADER - FOOTER - 2.0 * MARGIN);
+        int[] legend = legendSize(report);
+        double top = HEADER + MARGIN;
+        double fullWidth = width - 2.0 * MARGIN;
+        double fullHeight = height - HEADER - FOOTER - 2.0 * MARGIN;
+        PixelFrame beside = new PixelFrame(bounds, 2.0 * MARGIN + legend[0], top, fullWidth - legend[0] - MARGIN, fullHeight);
+        PixelFrame above = new PixelFrame(bounds, MARGIN, top, fullWidth, fullHeight - legend[1] - MARGIN);
+        return beside.metresPerPixel(0) <= above.metresPerPixel(0) ? beside : above;
+    }
+
+    /** Width and height of the legend box in pixels. */
+    private int[] legendSize(MapReport report) {
+        BufferedImage scratch = new BufferedImage(1, 1, BufferedImage.TYPE_INT_RGB);
+        Graphics2D g = scratch.createGraphics();
+        try {
+            g.setFont(LEGEND_FONT);
+            FontMetrics metrics = g.getFontMetrics();
+            int rows = 0;
+            int textWidth = 0;
+            for (String title : legendTitles(report)) {
+                rows++;
+                textWidth = Math.max(textWidth, metrics.stringWidth(title));
+            }
+            return new int[] {textWidth + 46, rows * 16 + 8};
+        } finally {
+            g.dispose();
+        }
+    }
+
+    /** The titles the legend lists: shown layers, then the groups when there are a few. */
+    private static List<String> legendTitles(MapReport report) {
+        List<String> titles = new java.util.ArrayList<>();
+        for (MapLayer layer : report.layers()) {
+            if (layer.shown()) {
+                titles.add(layer.title());
+            }
+        }
+        legendGroups(report).forEach(group -> titles.add(group.title()));
+        return titles;
+    }
+
+    private static List<MapGroup> legendGroups(MapReport report) {
+        return report.groups().size() > 1 && report.groups().size() <= LEGEND_GROUPS ? report.groups() : List.of();
     }
 
     /**
@@ -164,23 +207,11 @@ public final class QuickLookPng {
     }
 
     private void legend(Graphics2D g, MapReport report) {
-        g.setFont(new Font(Font.SANS_SERIF, Font.PLAIN, 11));
-        FontMetrics metrics = g.getFontMetrics();
-        int rows = 0;
-        int textWidth = 0;
-        for (MapLayer layer : report.layers()) {
-            if (layer.shown()) {
-                rows++;
-                textWidth = Math.max(textWidth, metrics.stringWidth(layer.title()));
-            }
-        }
-        List<MapGroup> groups = report.groups().size() > 1 && report.groups().size() <= LEGEND_GROUPS ? report.groups() : List.of();
-        for (MapGroup group : groups) {
-            rows++;
-            textWidth = Math.max(textWidth, metrics.stringWidth(group.title()));
-        }
-        int boxWidth = textWidth + 46;
-        int boxHeight = rows * 16 + 8;
+        g.setFont(LEGEND_FONT);
+        List<MapGroup> groups = legendGroups(report);
+        int[] size = legendSize(report);
+        int boxWidth = size[0];
+        int boxHeight = size[1];
         int x = MARGIN;
         int y = height - FOOTER - MARGIN - boxHeight;
         g.setColor(new Color(255, 255, 255, 220));
