@@ -1,7 +1,9 @@
 package org.streetcomb.solve;
 
 import java.util.Arrays;
+import java.util.Locale;
 import java.util.Random;
+import org.streetcomb.network.Components;
 import org.streetcomb.network.DijkstraSearch;
 import org.streetcomb.network.Heading;
 import org.streetcomb.network.StreetNetwork;
@@ -13,17 +15,18 @@ import org.streetcomb.read.Travel;
  * tour, the optimal one included, drives no less than some such sequence (take each pass where the tour
  * services it and replace the deadhead between two passes by a shortest path), so the sequence space
  * holds the optimum. For a given order, the direction of each two-way pass is chosen exactly by dynamic
- * programming over the sequence (two states per pass), and the order is improved by the sequence moves
- * of the rural postman local search of Hertz, Laporte &amp; Nanchen-Hugo (Operations Research 47, 1999):
- * 2-opt (reverse a stretch of the sequence) and Or-opt (move one to three consecutive passes elsewhere,
- * either way round), from a nearest-neighbour start and from seeded double-bridge perturbations of the
- * best order (iterated local search, Lourenço, Martin &amp; Stützle 2003). The result replaces the
- * constructed tour only when it is shorter, so it is never worse.
+ * programming over the sequence (two states per pass), and the order is improved by 2-opt (reverse a
+ * stretch of the sequence, as in the rural postman improvement procedures of Hertz, Laporte &amp;
+ * Nanchen-Hugo, INFORMS J. Computing 11, 1999) and Or-opt (move one to three consecutive passes
+ * elsewhere, either way round; Or 1976), then from seeded double-bridge perturbations of the best order
+ * (iterated local search, Lourenço, Martin &amp; Stützle 2003). The result replaces a constructed tour
+ * only when it is shorter, so it is never worse.
  *
  * <p>Written by hand: no library searches tours over a shortest-path matrix with per-pass directions.
  * Cost: 2K + 2 Dijkstra searches for K passes, then O(K) per move; the moves are bounded by
- * {@link #WORK}, and problems with more than {@link #MAX_PASSES} passes, or with several tours, keep
- * the constructed tour.
+ * {@link #WORK} (shared among the tours by their passes), and a tour with more than {@link #MAX_PASSES}
+ * passes keeps its constructed form. The search starts from the constructed tour's own order (read off an
+ * Euler walk, {@link EulerWalk}) and from a nearest-neighbour order, and keeps the better.
  */
 final class ServiceOrderSearch {
 
@@ -48,10 +51,11 @@ final class ServiceOrderSearch {
     private final int endKey;
     private final int[] keyNode;
     private final int[] rest;
+    private final long budget;
     private long work;
 
-    private ServiceOrderSearch(PostmanProblem problem, int[] edge, int[] allowed) {
-        StreetNetwork network = problem.network();
+    private ServiceOrderSearch(StreetNetwork network, int start, int end, int[] edge, int[] allowed, long budget) {
+        this.budget = budget;
         this.passes = edge.length;
         this.edge = edge;
         this.allowed = allowed;
@@ -61,8 +65,8 @@ final class ServiceOrderSearch {
         int[] nodes = new int[2 * passes + 2];
         int keys = 0;
         int[] ends = new int[2 * passes + 2];
-        ends[0] = problem.starts()[0];
-        ends[1] = problem.end();
+        ends[0] = start;
+        ends[1] = end;
         for (int t = 0; t < passes; t++) {
             ends[2 + 2 * t] = network.from(edge[t]);
             ends[3 + 2 * t] = network.to(edge[t]);
@@ -101,46 +105,86 @@ final class ServiceOrderSearch {
         }
     }
 
-    /** The constructed tour, or a shorter one found by searching the order of its service passes. */
+    /**
+     * The constructed tours, each replaced by a shorter one where searching the order of its service passes
+     * finds one.
+     */
     static Augmentation improve(PostmanProblem problem, Augmentation constructed) {
-        if (problem.starts().length != 1) {
-            return constructed;
-        }
         StreetNetwork network = problem.network();
         ServiceDemand demand = problem.demand();
-        int count = 0;
+        Components components = Components.of(network);
+        int[] starts = problem.starts();
+        int[] passesIn = new int[components.count()];
+        int total = 0;
         for (int e = 0; e < network.edgeCount(); e++) {
-            count += demand.passes(e);
+            passesIn[components.of(network.from(e))] += demand.passes(e);
+            total += demand.passes(e);
         }
-        if (count == 0 || count > MAX_PASSES) {
+        Traversals before = constructed.traversals();
+        int[] along = before.along().clone();
+        int[] against = before.against().clone();
+        int[] either = before.either().clone();
+        boolean undirected = !before.isDirected();
+        int improved = 0;
+        for (int j = 0; j < starts.length; j++) {
+            int part = components.of(starts[j]);
+            int count = passesIn[part];
+            if (count == 0 || count > MAX_PASSES) {
+                continue;
+            }
+            int[] edge = new int[count];
+            int[] allowed = new int[count];
+            int t = 0;
+            for (int e = 0; e < network.edgeCount(); e++) {
+                if (components.of(network.from(e)) != part) {
+                    continue;
+                }
+                Travel travel = network.travel(e);
+                int free = travel == Travel.FORWARD ? 1 : travel == Travel.BACKWARD ? 2 : 3;
+                t = fill(edge, allowed, t, e, demand.along()[e], 1);
+                t = fill(edge, allowed, t, e, demand.against()[e], 2);
+                t = fill(edge, allowed, t, e, demand.either()[e], free);
+            }
+            int end = j == 0 ? problem.end() : starts[j];
+            ServiceOrderSearch search = new ServiceOrderSearch(network, starts[j], end, edge, allowed,
+                    Math.max(WORK / 20, WORK * count / total));
+            int[] order = search.bestOrder(search.orderOf(EulerWalk.steps(network, before, starts[j])));
+            if (order == null) {
+                continue;
+            }
+            int[] a = new int[network.edgeCount()];
+            int[] b = new int[network.edgeCount()];
+            search.walk(network, order, a, b);
+            double old = 0;
+            double found = 0;
+            for (int e = 0; e < network.edgeCount(); e++) {
+                if (components.of(network.from(e)) == part) {
+                    old += before.total(e) * network.length(e);
+                    found += (a[e] + b[e]) * network.length(e);
+                }
+            }
+            if (found >= old - 1e-6) {
+                continue;
+            }
+            improved++;
+            for (int e = 0; e < network.edgeCount(); e++) {
+                if (components.of(network.from(e)) == part) {
+                    along[e] = undirected ? 0 : a[e];
+                    against[e] = undirected ? 0 : b[e];
+                    either[e] = undirected ? a[e] + b[e] : 0;
+                }
+            }
+        }
+        if (improved == 0) {
             return constructed;
         }
-        int[] edge = new int[count];
-        int[] allowed = new int[count];
-        int t = 0;
-        for (int e = 0; e < network.edgeCount(); e++) {
-            Travel travel = network.travel(e);
-            int free = travel == Travel.FORWARD ? 1 : travel == Travel.BACKWARD ? 2 : 3;
-            t = fill(edge, allowed, t, e, demand.along()[e], 1);
-            t = fill(edge, allowed, t, e, demand.against()[e], 2);
-            t = fill(edge, allowed, t, e, demand.either()[e], free);
-        }
-        ServiceOrderSearch search = new ServiceOrderSearch(problem, edge, allowed);
-        int[] order = search.bestOrder();
-        if (order == null) {
-            return constructed;
-        }
-        Traversals found = search.walk(problem, order, !constructed.traversals().isDirected());
-        double before = constructed.traversals().length(network);
-        double after = found.length(network);
-        if (after >= before - 1e-6) {
-            return constructed;
-        }
-        double service = demand.length(network);
-        return new Augmentation(found, after - service, constructed.oddNodes(),
-                constructed.method() + "; service order searched (2-opt, Or-opt, " + count + " passes), "
-                        + String.format(java.util.Locale.ROOT, "%.1f %% shorter", 100 * (before - after) / before),
-                after <= constructed.lowerBound() + 1e-9 * Math.max(1, after), constructed.lowerBound());
+        Traversals after = new Traversals(along, against, either);
+        double length = after.length(network);
+        double was = before.length(network);
+        return new Augmentation(after, length - demand.length(network), constructed.oddNodes(),
+                constructed.method() + "; service order searched (2-opt, Or-opt, " + total + " passes), "
+                        + String.format(Locale.ROOT, "%.1f %% shorter", 100 * (was - length) / was),
+                length <= constructed.lowerBound() + 1e-9 * Math.max(1, length), constructed.lowerBound());
     }
 
     private static int fill(int[] edge, int[] allowed, int t, int e, int count, int mask) {
@@ -153,15 +197,21 @@ final class ServiceOrderSearch {
     }
 
     /** The best order found, or null when no order is drivable (then the constructed tour stands). */
-    private int[] bestOrder() {
-        int[] best = nearestNeighbour();
+    private int[] bestOrder(int[] seed) {
+        int[] best = seed;
         double bestCost = localSearch(best);
+        int[] nearest = nearestNeighbour();
+        double nearestCost = localSearch(nearest);
+        if (nearestCost < bestCost) {
+            best = nearest;
+            bestCost = nearestCost;
+        }
         if (bestCost == INF) {
             return null;
         }
         Random random = new Random(passes);
         int[] trial = new int[passes];
-        for (int kick = 0; kick < KICKS && passes >= 4 && work < WORK; kick++) {
+        for (int kick = 0; kick < KICKS && passes >= 4 && work < budget; kick++) {
             doubleBridge(best, trial, random);
             double cost = localSearch(trial);
             if (cost < bestCost - 1e-9) {
@@ -170,6 +220,50 @@ final class ServiceOrderSearch {
             }
         }
         return best;
+    }
+
+    /** The passes in the order a walk services them: each pass at the first step that can service it. */
+    private int[] orderOf(int[] steps) {
+        int[] order = new int[passes];
+        boolean[] done = new boolean[passes];
+        int[] firstPass = new int[edge.length == 0 ? 0 : maxEdge() + 2];
+        java.util.Arrays.fill(firstPass, passes);
+        for (int t = passes - 1; t >= 0; t--) {
+            firstPass[edge[t]] = t;
+        }
+        int k = 0;
+        for (int s = 0; s < steps.length; s += 2) {
+            int e = steps[s];
+            if (e >= firstPass.length) {
+                continue;
+            }
+            int mask = steps[s + 1] == 1 ? 1 : 2;
+            int pick = -1;
+            for (int t = firstPass[e]; t < passes && edge[t] == e; t++) {
+                // a pass of fixed direction first: a free one can take the other direction later
+                if (!done[t] && (allowed[t] & mask) != 0 && (pick < 0 || allowed[t] != 3)) {
+                    pick = t;
+                }
+            }
+            if (pick >= 0) {
+                done[pick] = true;
+                order[k++] = pick;
+            }
+        }
+        for (int t = 0; t < passes; t++) {
+            if (!done[t]) {
+                order[k++] = t;
+            }
+        }
+        return order;
+    }
+
+    private int maxEdge() {
+        int max = 0;
+        for (int e : edge) {
+            max = Math.max(max, e);
+        }
+        return max;
     }
 
     private int[] nearestNeighbour() {
@@ -234,9 +328,9 @@ final class ServiceOrderSearch {
         int[] trial = new int[passes];
         double cost = cost(order);
         boolean improved = true;
-        while (improved && work < WORK) {
+        while (improved && work < budget) {
             improved = false;
-            for (int i = 0; i < passes && work < WORK; i++) {
+            for (int i = 0; i < passes && work < budget; i++) {
                 for (int j = i + 1; j < passes; j++) {
                     reverse(order, trial, i, j);
                     double c = cost(trial);
@@ -248,7 +342,7 @@ final class ServiceOrderSearch {
                 }
             }
             for (int length = 1; length <= 3; length++) {
-                for (int i = 0; i + length <= passes && work < WORK; i++) {
+                for (int i = 0; i + length <= passes && work < budget; i++) {
                     for (int p = 0; p <= passes - length; p++) {
                         for (int flip = p == i ? 1 : 0; flip < (length > 1 || p != i ? 2 : 0); flip++) {
                             move(order, trial, i, length, p, flip == 1);
@@ -359,12 +453,8 @@ final class ServiceOrderSearch {
         return Math.min(e0, e1);
     }
 
-    /** The passes of the walk that drives the order with its best directions and shortest paths between. */
-    private Traversals walk(PostmanProblem problem, int[] order, boolean undirected) {
-        StreetNetwork network = problem.network();
-        int m = network.edgeCount();
-        int[] along = new int[m];
-        int[] against = new int[m];
+    /** Adds the passes of the walk that drives the order with its best directions and shortest paths between. */
+    private void walk(StreetNetwork network, int[] order, int[] along, int[] against) {
         int[] chosen = new int[passes];
         directions(order, chosen);
         DijkstraSearch search = new DijkstraSearch(network, Heading.OUTBOUND);
@@ -384,13 +474,5 @@ final class ServiceOrderSearch {
                 at = keyNode[head[order[i]][chosen[i]]];
             }
         }
-        if (!undirected) {
-            return Traversals.directed(along, against);
-        }
-        int[] either = new int[m];
-        for (int e = 0; e < m; e++) {
-            either[e] = along[e] + against[e];
-        }
-        return Traversals.undirected(either);
     }
 }
