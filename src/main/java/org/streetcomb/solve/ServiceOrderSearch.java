@@ -34,10 +34,10 @@ final class ServiceOrderSearch {
     static final int MAX_PASSES = 400;
 
     /** Dynamic-programming steps allowed in all (each step compares four direction pairs). */
-    static final long WORK = 40_000_000L;
+    static final long WORK = 10_000_000L;
 
     /** Perturbations of the best order tried after the first local optimum. */
-    static final int KICKS = 200;
+    static final int KICKS = 50;
 
     private static final double INF = Double.POSITIVE_INFINITY;
 
