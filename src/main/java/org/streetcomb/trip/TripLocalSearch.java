@@ -126,6 +126,7 @@ final class TripLocalSearch {
                 continue;
             }
             // cheap detour arithmetic screens each move before the trips are rebuilt and checked in full
+            double gain = gain(a, b);
             double outOfOne = detour(before(one, p), one[p], after(one, p));
             double outOfTwo = detour(before(two, q), two[q], after(two, q));
             double removal = distances.between(before(one, p), after(one, p)) - outOfOne;
@@ -135,48 +136,134 @@ final class TripLocalSearch {
                     continue;
                 }
                 double beforeS = detour(before(two, q), ref, tasks.start(two[q])) - distances.between(before(two, q), tasks.start(two[q]));
-                if (removal + beforeS < -EPSILON && replace(a, without(one, p), b, with(two, q, ref))) {
+                if (removal + beforeS < gain && replace(a, without(one, p), b, with(two, q, ref))) {
                     return true;
                 }
                 double afterS = detour(tasks.end(two[q]), ref, after(two, q)) - distances.between(tasks.end(two[q]), after(two, q));
-                if (removal + afterS < -EPSILON && replace(a, without(one, p), b, with(two, q + 1, ref))) {
+                if (removal + afterS < gain && replace(a, without(one, p), b, with(two, q + 1, ref))) {
                     return true;
                 }
                 double intoTwo = detour(before(two, q), ref, after(two, q)) - outOfTwo;
                 for (int e = 0; e < 2; e++) {
                     int other = 2 * s + e;
                     if (tasks.allowed(other)
-                            && intoTwo + detour(before(one, p), other, after(one, p)) - outOfOne < -EPSILON
+                            && intoTwo + detour(before(one, p), other, after(one, p)) - outOfOne < gain
                             && replace(a, set(one, p, other), b, set(two, q, ref))) {
                         return true;
                     }
                 }
             }
-            if (replace(a, join(one, p + 1, two, q), b, join(two, q, one, p + 1))
-                    || replace(a, join(one, p, two, q + 1), b, join(two, q + 1, one, p))) {
+            // the tails keep their cost: the exchanges are screened exactly on their two new links
+            double tailsAfterT = distances.between(tasks.end(one[p]), tasks.start(two[q]))
+                    + distances.between(before(two, q), after(one, p))
+                    - distances.between(tasks.end(one[p]), after(one, p))
+                    - distances.between(before(two, q), tasks.start(two[q]));
+            double tailsAfterS = distances.between(before(one, p), after(two, q))
+                    + distances.between(tasks.end(two[q]), tasks.start(one[p]))
+                    - distances.between(before(one, p), tasks.start(one[p]))
+                    - distances.between(tasks.end(two[q]), after(two, q));
+            if ((tailsAfterT < gain && replace(a, join(one, p + 1, two, q), b, join(two, q, one, p + 1)))
+                    || (tailsAfterS < gain && replace(a, join(one, p, two, q + 1), b, join(two, q + 1, one, p)))
+                    || crossReversed(a, one, p, b, two, q)
+                    || (p + 1 < one.length && movePair(a, one, p, b, two, q))) {
                 return true;
             }
         }
         return false;
     }
 
+    /**
+     * The other 2-opt between trips: one trip's head up to t followed by the other's head up to s driven
+     * backwards, and the first trip's tail driven backwards followed by the other's tail.
+     */
+    private boolean crossReversed(int a, int[] one, int p, int b, int[] two, int q) {
+        // the runs keep their cost reversed where distances are symmetric: screen on the two new links
+        double links = distances.between(tasks.end(one[p]), tasks.end(two[q]))
+                + distances.between(p + 1 < one.length ? tasks.start(one[p + 1]) : depot, after(two, q))
+                - distances.between(tasks.end(one[p]), after(one, p))
+                - distances.between(tasks.end(two[q]), after(two, q));
+        if (links >= gain(a, b)) {
+            return false;
+        }
+        int[] first = new int[p + 1 + q + 1];
+        int[] second = new int[one.length - p - 1 + two.length - q - 1];
+        System.arraycopy(one, 0, first, 0, p + 1);
+        for (int k = 0; k <= q; k++) {
+            first[p + 1 + k] = two[q - k] ^ 1;
+        }
+        for (int k = 0; k < one.length - p - 1; k++) {
+            second[k] = one[one.length - 1 - k] ^ 1;
+        }
+        System.arraycopy(two, q + 1, second, one.length - p - 1, two.length - q - 1);
+        return allAllowed(first) && allAllowed(second) && replace(a, first, b, second);
+    }
+
+    /** Moves t and the task after it together next to s (Or-opt of two tasks), either way round. */
+    private boolean movePair(int a, int[] one, int p, int b, int[] two, int q) {
+        double gain = gain(a, b);
+        int[] rest = without(without(one, p), p);
+        int[][] pairs = {{one[p], one[p + 1]}, {one[p + 1] ^ 1, one[p] ^ 1}};
+        double removal = distances.between(before(one, p), after(one, p + 1))
+                - distances.between(before(one, p), tasks.start(one[p])) - inner(one[p], one[p + 1])
+                - distances.between(tasks.end(one[p + 1]), after(one, p + 1));
+        for (int[] pair : pairs) {
+            if (!tasks.allowed(pair[0]) || !tasks.allowed(pair[1])) {
+                continue;
+            }
+            for (int at = q; at <= q + 1; at++) {
+                int x = at == 0 ? depot : tasks.end(two[at - 1]);
+                int y = at == two.length ? depot : tasks.start(two[at]);
+                double insertion = distances.between(x, tasks.start(pair[0])) + inner(pair[0], pair[1])
+                        + distances.between(tasks.end(pair[1]), y) - distances.between(x, y);
+                if (removal + insertion < gain && replace(a, rest, b, with(with(two, at, pair[1]), at, pair[0]))) {
+                    return true;
+                }
+            }
+        }
+        return false;
+    }
+
+    private double inner(int first, int second) {
+        return tasks.cost(first) + distances.between(tasks.end(first), tasks.start(second)) + tasks.cost(second);
+    }
+
+    private boolean allAllowed(int[] trip) {
+        for (int ref : trip) {
+            if (!tasks.allowed(ref)) {
+                return false;
+            }
+        }
+        return true;
+    }
+
     /** Moves within one trip: task at p next to the task at q, by relocation or by reversing the run between. */
     private boolean withinTrip(int a, int[] trip, int p, int q) {
+        // a move within a trip leaves its demand and service as they are: only a shorter trip can pay
         int ref = trip[p];
+        int[] rest = without(trip, p);
+        double removal = distances.between(before(trip, p), after(trip, p)) - detour(before(trip, p), ref, after(trip, p));
         for (int d = 0; d < 2; d++) {
             int moved = (ref & ~1) | d;
             if (!tasks.allowed(moved)) {
                 continue;
             }
-            int[] rest = without(trip, p);
             int at = q > p ? q - 1 : q;
-            if (replace(a, with(rest, at, moved), -1, null) || replace(a, with(rest, at + 1, moved), -1, null)) {
-                return true;
+            for (int slot = at; slot <= at + 1; slot++) {
+                int x = slot == 0 ? depot : tasks.end(rest[slot - 1]);
+                int y = slot == rest.length ? depot : tasks.start(rest[slot]);
+                if (removal + detour(x, moved, y) - distances.between(x, y) < -EPSILON
+                        && replace(a, with(rest, slot, moved), -1, null)) {
+                    return true;
+                }
             }
         }
         int from = Math.min(p, q) + (q > p ? 1 : 0);
         int to = Math.max(p, q) - (q > p ? 0 : 1);
-        if (to > from) {
+        boolean shorter = to > from && distances.between(before(trip, from), tasks.end(trip[to]))
+                + distances.between(tasks.start(trip[from]), after(trip, to))
+                - distances.between(before(trip, from), tasks.start(trip[from]))
+                - distances.between(tasks.end(trip[to]), after(trip, to)) < -EPSILON;
+        if (shorter) {
             int[] reversed = trip.clone();
             for (int k = from; k <= to; k++) {
                 reversed[k] = trip[from + to - k] ^ 1;
@@ -254,6 +341,15 @@ final class TripLocalSearch {
         }
         cost += distances.between(at, depot);
         return new double[] {cost, service, demand};
+    }
+
+    /**
+     * The change in cost below which a move between trips a and b may pay: any saving at all, or with
+     * penalised overfilling, a rise no larger than the penalty both trips now carry.
+     */
+    private double gain(int a, int b) {
+        return penalty == Double.POSITIVE_INFINITY ? -EPSILON
+                : priced(totals.get(a)) - totals.get(a)[0] + priced(totals.get(b)) - totals.get(b)[0] - EPSILON;
     }
 
     /** A trip's cost plus the penalty for what it uses beyond the limit. */

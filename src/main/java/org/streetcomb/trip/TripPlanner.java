@@ -56,9 +56,10 @@ public final class TripPlanner {
 
     /**
      * Price of overfilling a trip in the penalised local search, relative to the solution's cost per unit of
-     * use (0.25 to 4 were tried on the benchmark sets; 0.5 did best on val, see docs/quality.md).
+     * use (0.25 to 4 were tried on the benchmark sets; 1 did best over gdb, val and egl together, see
+     * docs/quality.md).
      */
-    static final double PENALTY = 0.5;
+    static final double PENALTY = 1;
 
     private final StreetNetwork network;
     private final int depot;
