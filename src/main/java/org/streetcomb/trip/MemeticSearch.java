@@ -20,8 +20,13 @@ import java.util.function.ToDoubleFunction;
  */
 final class MemeticSearch {
 
-    /** Members of the population, as in the published algorithm. */
+    /** Members of the population, as in the published algorithm, for up to {@link #FULL_SIZE} tasks. */
     static final int POPULATION = 30;
+    /**
+     * Tasks up to which the population and the children run in full; beyond, both shrink in proportion, so
+     * a city-sized plan (local search costs grow with tasks times trip length) keeps the default quick.
+     */
+    static final int FULL_SIZE = 100;
     /**
      * Share of children (and first members) improved by local search; 0.3 and 0.5 were tried on the
      * benchmark sets, 0.5 reached lower gaps at about 1.5 times the time.
@@ -53,13 +58,17 @@ final class MemeticSearch {
     /**
      * @param first     the improved trips to start from (always a member)
      * @param orders    draws further giant tours for the initial population
-     * @param children  children to breed
+     * @param budget    children to breed for up to {@link #FULL_SIZE} tasks
      * @return the best trips found
      */
-    List<int[]> run(List<int[]> first, Supplier<int[]> orders, int children) {
+    List<int[]> run(List<int[]> first, Supplier<int[]> orders, int budget) {
+        int n = TripPlanner.concatenate(first).length;
+        double scale = Math.min(1.0, (double) FULL_SIZE / Math.max(1, n));
+        int size = Math.max(4, (int) Math.round(POPULATION * scale));
+        int children = (int) Math.round(budget * scale);
         population.clear();
         population.add(member(first));
-        for (int slot = 1; slot < POPULATION; slot++) {
+        for (int slot = 1; slot < size; slot++) {
             for (int attempt = 0; attempt < CLONE_TRIES; attempt++) {
                 Member m = member(decoder.decode(orders.get(), random.nextDouble() < IMPROVE_RATE));
                 if (!clone(m.score(), -1)) {
