@@ -36,9 +36,11 @@ public final class DirectedRuralPostman {
             servicedOrBalanced[e] = balancedService.total(e) > 0;
         }
         ServiceGroups groups = ServiceGroups.of(problem, serviced);
-        Construction best = construct(problem, groups, ServiceGroups.of(problem, servicedOrBalanced));
-        Construction other = construct(problem, groups, groups);
-        if (other.traversals.length(network) < best.traversals.length(network)) {
+        // joined by its own links, every group is reached; joined as the balanced service arcs group them,
+        // the final flow may take other paths than those that joined them, so that tour is checked
+        Construction best = construct(problem, groups, groups);
+        Construction other = construct(problem, groups, ServiceGroups.of(problem, servicedOrBalanced));
+        if (other.traversals.length(network) < best.traversals.length(network) && connected(problem, groups, other.traversals)) {
             best = other;
         }
         double service = demand.length(network);
@@ -63,11 +65,6 @@ public final class DirectedRuralPostman {
         int[][] links = ComponentConnector.connect(network, linked.group, linked.count, true);
         Traversals best = withLinks(problem, links);
         int dropped = 0;
-        Components components = Components.of(network);
-        int[] part = new int[network.nodeCount()];
-        for (int v = 0; v < part.length; v++) {
-            part[v] = Math.max(components.of(v), 0);
-        }
         int[] linkEdges = java.util.stream.IntStream.range(0, m)
                 .filter(e -> links[0][e] + links[1][e] > 0).toArray();
         for (int i = 0; i < Math.min(linkEdges.length, DROP_ATTEMPTS); i++) {
@@ -76,8 +73,7 @@ public final class DirectedRuralPostman {
             links[0][e] = 0;
             links[1][e] = 0;
             Traversals trial = withLinks(problem, links);
-            if (trial.length(network) < best.length(network) - 1e-9
-                    && groups.connected(network, part, components.count(), totals(trial))) {
+            if (trial.length(network) < best.length(network) - 1e-9 && connected(problem, groups, trial)) {
                 best = trial;
                 dropped++;
             } else {
@@ -86,6 +82,17 @@ public final class DirectedRuralPostman {
             }
         }
         return new Construction(best, linked.count, dropped);
+    }
+
+    /** Whether the traversals join every group of streets to service (and the tour's ends). */
+    private static boolean connected(PostmanProblem problem, ServiceGroups groups, Traversals traversals) {
+        StreetNetwork network = problem.network();
+        Components components = Components.of(network);
+        int[] part = new int[network.nodeCount()];
+        for (int v = 0; v < part.length; v++) {
+            part[v] = Math.max(components.of(v), 0);
+        }
+        return groups.connected(network, part, components.count(), totals(traversals));
     }
 
     private static Traversals withLinks(PostmanProblem problem, int[][] links) {

@@ -13,11 +13,13 @@ import org.streetcomb.read.RoadFeature;
 import org.streetcomb.read.Travel;
 
 /**
- * The exact shortest walk that drives every required edge at least once in a permitted direction, from a
- * start node to an end node (the same node for a closed tour): Dijkstra's algorithm over the states (node,
- * set of required edges driven so far). Exact for one pass per required edge in any permitted direction
- * (the one-pass kerb mode), and small enough for up to about 14 required edges on small grids. Test-only
- * reference; the grids are invented.
+ * The exact shortest walk that meets a service demand, from a start node to an end node (the same node for
+ * a closed tour): Dijkstra's algorithm over the states (node, service passes made so far). Each pass the
+ * demand asks for is one bit: along an edge, against it, or in either direction; driving an edge makes
+ * the first pass of that edge still missing that the direction can make (a pass in its own direction
+ * first, then an either-way pass), which loses nothing as passes of one kind are interchangeable. Exact for
+ * every kerb mode, and small enough for up to about 14 passes on small grids. Test-only reference; the
+ * grids are invented.
  */
 final class ExhaustiveWalk {
 
@@ -26,12 +28,27 @@ final class ExhaustiveWalk {
     private ExhaustiveWalk() {
     }
 
-    /** Length of the shortest walk, or infinity when none exists. */
+    /** Length of the shortest walk driving every required edge once in a permitted direction, or infinity. */
     static double shortest(StreetNetwork network, boolean[] required, int start, int end) {
-        int[] bit = new int[network.edgeCount()];
+        return shortest(network, ServiceDemand.of(network, required, KerbMode.ONE_PASS), start, end);
+    }
+
+    /** Length of the shortest walk making every service pass of {@code demand}, or infinity when none exists. */
+    static double shortest(StreetNetwork network, ServiceDemand demand, int start, int end) {
+        int m = network.edgeCount();
+        int[][] alongBits = new int[m][];
+        int[][] againstBits = new int[m][];
+        int[][] eitherBits = new int[m][];
         int bits = 0;
-        for (int e = 0; e < bit.length; e++) {
-            bit[e] = required[e] ? 1 << bits++ : 0;
+        for (int e = 0; e < m; e++) {
+            alongBits[e] = new int[demand.along()[e]];
+            againstBits[e] = new int[demand.against()[e]];
+            eitherBits[e] = new int[demand.either()[e]];
+            for (int[] kind : new int[][] {alongBits[e], againstBits[e], eitherBits[e]}) {
+                for (int k = 0; k < kind.length; k++) {
+                    kind[k] = 1 << bits++;
+                }
+            }
         }
         int full = (1 << bits) - 1;
         double[][] best = new double[network.nodeCount()][1 << bits];
@@ -59,7 +76,8 @@ final class ExhaustiveWalk {
                     continue;
                 }
                 int w = network.other(e, v);
-                int next = mask | bit[e];
+                int pass = firstMissing(forward ? alongBits[e] : againstBits[e], mask);
+                int next = mask | (pass != 0 ? pass : firstMissing(eitherBits[e], mask));
                 double d = s[0] + network.length(e);
                 if (d < best[w][next]) {
                     best[w][next] = d;
@@ -68,6 +86,16 @@ final class ExhaustiveWalk {
             }
         }
         return Double.POSITIVE_INFINITY;
+    }
+
+    /** The first of the passes not yet made, or 0 when all are. */
+    private static int firstMissing(int[] passes, int mask) {
+        for (int bit : passes) {
+            if ((mask & bit) == 0) {
+                return bit;
+            }
+        }
+        return 0;
     }
 
     /**
