@@ -25,12 +25,13 @@ import org.streetcomb.read.Travel;
  * <p>Written by hand: no library searches tours over a shortest-path matrix with per-pass directions.
  * Cost: 2K + 2 Dijkstra searches for K passes, then O(K) per move; the moves are bounded by
  * {@link #WORK} (shared among the tours by their passes), and a tour with more than {@link #MAX_PASSES}
- * passes keeps its constructed form. The search starts from the constructed tour's own order (read off an
+ * passes is searched in stretches of that many passes of its constructed order. The search starts from
+ * the constructed tour's own order (read off an
  * Euler walk, {@link EulerWalk}) and from a nearest-neighbour order, and keeps the better.
  */
 final class ServiceOrderSearch {
 
-    /** Largest number of service passes searched: the distance matrix needs 2K + 2 full searches. */
+    /** Most service passes searched together: the distance matrix needs 2K + 2 full searches. */
     static final int MAX_PASSES = 400;
 
     /** Dynamic-programming steps allowed in all (each step compares four direction pairs). */
@@ -110,6 +111,15 @@ final class ServiceOrderSearch {
      * finds one.
      */
     static Augmentation improve(PostmanProblem problem, Augmentation constructed) {
+        return improve(problem, constructed, MAX_PASSES);
+    }
+
+    /**
+     * As {@link #improve(PostmanProblem, Augmentation)}, searching at most {@code window} passes at a time:
+     * a longer tour is searched in consecutive stretches of its constructed order, each from where the
+     * stretch before it ends to where the next one begins, so every stretch keeps its place in the tour.
+     */
+    static Augmentation improve(PostmanProblem problem, Augmentation constructed, int window) {
         StreetNetwork network = problem.network();
         ServiceDemand demand = problem.demand();
         Components components = Components.of(network);
@@ -129,7 +139,7 @@ final class ServiceOrderSearch {
         for (int j = 0; j < starts.length; j++) {
             int part = components.of(starts[j]);
             int count = passesIn[part];
-            if (count == 0 || count > MAX_PASSES) {
+            if (count == 0) {
                 continue;
             }
             int[] edge = new int[count];
@@ -146,15 +156,13 @@ final class ServiceOrderSearch {
                 t = fill(edge, allowed, t, e, demand.either()[e], free);
             }
             int end = j == 0 ? problem.end() : starts[j];
-            ServiceOrderSearch search = new ServiceOrderSearch(network, starts[j], end, edge, allowed,
-                    Math.max(WORK / 20, WORK * count / total));
-            int[] order = search.bestOrder(search.orderOf(EulerWalk.steps(network, before, starts[j])));
-            if (order == null) {
-                continue;
-            }
+            int[] steps = EulerWalk.steps(network, before, starts[j]);
             int[] a = new int[network.edgeCount()];
             int[] b = new int[network.edgeCount()];
-            search.walk(network, order, a, b);
+            long budget = Math.max(WORK / 20, WORK * count / total);
+            if (!searchInStretches(network, starts[j], end, edge, allowed, steps, window, budget, a, b)) {
+                continue;
+            }
             double old = 0;
             double found = 0;
             for (int e = 0; e < network.edgeCount(); e++) {
@@ -185,6 +193,41 @@ final class ServiceOrderSearch {
                 constructed.method() + "; service order searched (2-opt, Or-opt, " + total + " passes), "
                         + String.format(Locale.ROOT, "%.1f %% shorter", 100 * (was - length) / was),
                 length <= constructed.lowerBound() + 1e-9 * Math.max(1, length), constructed.lowerBound());
+    }
+
+    /**
+     * Searches the passes in stretches of at most {@code window} of the constructed order and adds the
+     * resulting walk to {@code along}/{@code against}; false when some stretch has no drivable order.
+     */
+    private static boolean searchInStretches(StreetNetwork network, int start, int end, int[] edge, int[] allowed,
+                                             int[] steps, int window, long budget, int[] along, int[] against) {
+        int count = edge.length;
+        int[] constructed = new int[count];
+        int[] direction = new int[count];
+        orderOf(edge, allowed, steps, constructed, direction);
+        int from = start;
+        for (int first = 0; first < count; first += window) {
+            int n = Math.min(window, count - first);
+            int[] part = new int[n];
+            int[] partAllowed = new int[n];
+            for (int i = 0; i < n; i++) {
+                part[i] = edge[constructed[first + i]];
+                partAllowed[i] = allowed[constructed[first + i]];
+            }
+            // the stretch ends where the next one's first pass begins, in its constructed direction
+            int next = first + n < count ? constructed[first + n] : -1;
+            int to = next < 0 ? end : direction[next] == 0 ? network.from(edge[next]) : network.to(edge[next]);
+            ServiceOrderSearch search = new ServiceOrderSearch(network, from, to, part, partAllowed,
+                    Math.max(1, budget * n / count));
+            int[] identity = java.util.stream.IntStream.range(0, n).toArray();
+            int[] order = search.bestOrder(identity);
+            if (order == null) {
+                return false;
+            }
+            search.walk(network, order, along, against);
+            from = to;
+        }
+        return true;
     }
 
     private static int fill(int[] edge, int[] allowed, int t, int e, int count, int mask) {
@@ -222,11 +265,18 @@ final class ServiceOrderSearch {
         return best;
     }
 
-    /** The passes in the order a walk services them: each pass at the first step that can service it. */
-    private int[] orderOf(int[] steps) {
-        int[] order = new int[passes];
+    /**
+     * The passes in the order a walk services them (each pass at the first step that can service it, with
+     * the direction it was driven: 0 along the edge, 1 against); passes the walk does not service go last.
+     */
+    private static void orderOf(int[] edge, int[] allowed, int[] steps, int[] order, int[] direction) {
+        int passes = edge.length;
         boolean[] done = new boolean[passes];
-        int[] firstPass = new int[edge.length == 0 ? 0 : maxEdge() + 2];
+        int maxEdge = 0;
+        for (int e : edge) {
+            maxEdge = Math.max(maxEdge, e);
+        }
+        int[] firstPass = new int[passes == 0 ? 0 : maxEdge + 2];
         java.util.Arrays.fill(firstPass, passes);
         for (int t = passes - 1; t >= 0; t--) {
             firstPass[edge[t]] = t;
@@ -247,23 +297,16 @@ final class ServiceOrderSearch {
             }
             if (pick >= 0) {
                 done[pick] = true;
+                direction[pick] = mask == 1 ? 0 : 1;
                 order[k++] = pick;
             }
         }
         for (int t = 0; t < passes; t++) {
             if (!done[t]) {
+                direction[t] = (allowed[t] & 1) != 0 ? 0 : 1;
                 order[k++] = t;
             }
         }
-        return order;
-    }
-
-    private int maxEdge() {
-        int max = 0;
-        for (int e : edge) {
-            max = Math.max(max, e);
-        }
-        return max;
     }
 
     private int[] nearestNeighbour() {
