@@ -117,6 +117,12 @@ public final class AuditCommand implements Callable<Integer> {
                     + "the best fitting drive only (default: ${DEFAULT-VALUE}).")
     double doubtOdds;
 
+    @Option(names = "--drift-window", paramLabel = "SECONDS", defaultValue = "0",
+            description = "Take out the receiver's slowly varying error (drift), estimated as the mean offset of the "
+                    + "fixes from a first match over this many seconds either side, e.g. 60 for tracks that run "
+                    + "beside the streets for minutes; 0 does not (default: ${DEFAULT-VALUE}).")
+    double driftWindow;
+
     @Option(names = "--max-gap", paramLabel = "METRES", defaultValue = "300",
             description = "The longest stretch credited between two consecutive fixes; a longer dropout is not "
                     + "counted as driven (default: ${DEFAULT-VALUE} m).")
@@ -157,6 +163,9 @@ public final class AuditCommand implements Callable<Integer> {
         positive(beta, "--route-scale");
         positive(maxGap, "--max-gap");
         positive(maxSpeed, "--max-speed");
+        if (!(driftWindow >= 0) || !Double.isFinite(driftWindow)) {
+            throw new CommandLine.ParameterException(spec.commandLine(), "--drift-window must be 0 or more seconds");
+        }
         if (!(doubtOdds >= 1) || !Double.isFinite(doubtOdds)) {
             throw new CommandLine.ParameterException(spec.commandLine(), "--doubt-odds must be 1 or more");
         }
@@ -169,7 +178,7 @@ public final class AuditCommand implements Callable<Integer> {
             throw new CommandLine.ParameterException(spec.commandLine(),
                     "--start cannot be combined with the trip options: every trip starts and ends at the depot");
         }
-        MatchSettings settings = new MatchSettings(sigma, radius, beta, maxGap, maxSpeed / 3.6, doubtOdds);
+        MatchSettings settings = new MatchSettings(sigma, radius, beta, maxGap, maxSpeed / 3.6, doubtOdds, driftWindow);
         StageClock clock = new StageClock(TerminalProgress.forCommandLine(quiet, System.err));
         TrackLines seen = new TrackLines();
         Audit audit = DriveAudit.run(new AuditRequest(layerFile, tracks, layer.snap(), settings, coveredAt, bothKerbs,

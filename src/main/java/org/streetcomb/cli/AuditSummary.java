@@ -80,6 +80,7 @@ final class AuditSummary {
         ObjectNode matching = s.json.putObject("matching");
         matching.put("method", "hidden Markov model (Newson & Krumm 2009), drives within the doubt odds of the best");
         matching.put("doubt_odds", settings.doubtOdds());
+        matching.put("drift_window_s", settings.driftWindow());
         matching.put("gps_sigma_m", settings.sigma());
         matching.put("search_radius_m", settings.radius());
         matching.put("route_scale_m", settings.beta());
@@ -137,9 +138,9 @@ final class AuditSummary {
                 + "%d speed spikes, %d splits at impossible speed", tally.thinned(), tally.backwards(), tally.spikes(),
                 tally.splits());
         s.line("Matching", "%d points on streets in %d stretch%s, %d off the network (> %.0f m), %d dropouts or jumps "
-                + "not bridged; sigma %.1f m, doubt odds %.0f", tally.matched(), tally.chains(),
+                + "not bridged; sigma %.1f m, doubt odds %.0f, drift window %.0f s", tally.matched(), tally.chains(),
                 tally.chains() == 1 ? "" : "es", tally.offNetwork(), settings.radius(), tally.breaks(), settings.sigma(),
-                settings.doubtOdds());
+                settings.doubtOdds(), settings.driftWindow());
         s.line("Coverage", "%.3f km of %.3f km required driven (%.1f %%)%s", coverage.driven() / 1000,
                 coverage.needed() / 1000, 100 * share(coverage.driven(), coverage.needed()).doubleValue(),
                 coverage.bothKerbs() ? ", both kerbs of two-way streets" : "");

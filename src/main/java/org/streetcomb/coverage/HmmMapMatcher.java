@@ -89,6 +89,8 @@ public final class HmmMapMatcher {
 
     /** The candidate states of one fix and the Viterbi scores over them. */
     private static final class Layer {
+        /** Position of the fix in the segment. */
+        final int fix;
         final double x;
         final double y;
         final double time;
@@ -96,13 +98,17 @@ public final class HmmMapMatcher {
         final int[] edge;
         final boolean[] along;
         final double[] offset;
+        /** The nearest point of each state's edge to the fix, in the plane. */
+        final double[] nearX;
+        final double[] nearY;
         final double[] emission;
         /** Forward (Viterbi) score: log-probability of the best drive ending in each state. */
         final double[] score;
         /** The moves into this layer kept for crediting; see {@link Moves}. */
         Moves moves = Moves.NONE;
 
-        Layer(double x, double y, double time, StreetIndex.Hits hits, double sigma) {
+        Layer(int fix, double x, double y, double time, StreetIndex.Hits hits, double sigma) {
+            this.fix = fix;
             this.x = x;
             this.y = y;
             this.time = time;
@@ -110,6 +116,8 @@ public final class HmmMapMatcher {
             edge = new int[size];
             along = new boolean[size];
             offset = new double[size];
+            nearX = new double[size];
+            nearY = new double[size];
             emission = new double[size];
             score = new double[size];
             for (int h = 0; h < hits.count(); h++) {
@@ -119,6 +127,8 @@ public final class HmmMapMatcher {
                     edge[s] = hits.edge()[h];
                     along[s] = d == 0;
                     offset[s] = hits.offset()[h];
+                    nearX[s] = hits.nearX()[h];
+                    nearY[s] = hits.nearY()[h];
                     emission[s] = -0.5 * z * z;
                 }
             }
@@ -131,6 +141,30 @@ public final class HmmMapMatcher {
      * @param run indices into the segment of the fixes to use, in order
      */
     public void match(TrackSegment segment, int[] run, DrivenIntervals driven, MatchTally tally) {
+        chains(segment, run, tally, chain -> credit(chain, driven));
+    }
+
+    /**
+     * The offset of each fix of the run from the street position the most probable drive puts it at
+     * (fix minus matched point, metres east and north in the plane), NaN for fixes left unmatched.
+     */
+    public double[][] residuals(TrackSegment segment, int[] run) {
+        double[][] residual = new double[2][segment.size()];
+        Arrays.fill(residual[0], Double.NaN);
+        Arrays.fill(residual[1], Double.NaN);
+        chains(segment, run, new MatchTally(), chain -> {
+            int[] states = mostProbable(chain);
+            for (int k = 0; k < chain.size(); k++) {
+                Layer layer = chain.get(k);
+                residual[0][layer.fix] = layer.x - layer.nearX[states[k]];
+                residual[1][layer.fix] = layer.y - layer.nearY[states[k]];
+            }
+        });
+        return residual;
+    }
+
+    /** Runs the forward pass over the fixes and hands each finished chain (two fixes or more) to {@code sink}. */
+    private void chains(TrackSegment segment, int[] run, MatchTally tally, java.util.function.Consumer<List<Layer>> sink) {
         List<Layer> chain = new ArrayList<>();
         pace = 0;
         for (int i : run) {
@@ -141,18 +175,51 @@ public final class HmmMapMatcher {
                 tally.offNetwork++;
                 continue;
             }
-            Layer layer = new Layer(x, y, segment.time()[i], hits, settings.sigma());
+            Layer layer = new Layer(i, x, y, segment.time()[i], hits, settings.sigma());
             if (chain.isEmpty() || !advance(chain.get(chain.size() - 1), layer)) {
                 if (!chain.isEmpty()) {
                     tally.breaks++;
-                    finish(chain, driven, tally);
+                    finish(chain, tally, sink);
                     chain.clear();
                 }
                 System.arraycopy(layer.emission, 0, layer.score, 0, layer.size);
             }
             chain.add(layer);
         }
-        finish(chain, driven, tally);
+        finish(chain, tally, sink);
+    }
+
+    private static void finish(List<Layer> chain, MatchTally tally, java.util.function.Consumer<List<Layer>> sink) {
+        if (chain.size() < 2) {
+            return;
+        }
+        tally.chains++;
+        tally.matched += chain.size();
+        sink.accept(chain);
+    }
+
+    /** The states of the most probable drive (the Viterbi path), read back through the best move into each. */
+    private static int[] mostProbable(List<Layer> chain) {
+        int n = chain.size();
+        int[] states = new int[n];
+        Layer last = chain.get(n - 1);
+        for (int s = 1; s < last.size; s++) {
+            if (last.score[s] > last.score[states[n - 1]]) {
+                states[n - 1] = s;
+            }
+        }
+        for (int k = n - 1; k > 0; k--) {
+            Layer layer = chain.get(k);
+            Moves moves = layer.moves;
+            int from = -1;
+            for (int m = 0; m < moves.size && from < 0; m++) {
+                if (moves.to[m] == states[k] && moves.score[m] == layer.score[states[k]]) {
+                    from = moves.from[m];
+                }
+            }
+            states[k - 1] = from;
+        }
+        return states;
     }
 
     /** Fills the scores of {@code next} from {@code previous}; false when no believable route joins them. */
@@ -294,12 +361,7 @@ public final class HmmMapMatcher {
      * whole drive is its forward score plus that of the state it reaches. With a zero margin these are the
      * moves of the Viterbi path (and of drives tied with it).
      */
-    private void finish(List<Layer> chain, DrivenIntervals driven, MatchTally tally) {
-        if (chain.size() < 2) {
-            return;
-        }
-        tally.chains++;
-        tally.matched += chain.size();
+    private void credit(List<Layer> chain, DrivenIntervals driven) {
         int n = chain.size();
         double[][] rest = new double[n][];
         rest[n - 1] = new double[chain.get(n - 1).size];

@@ -13,9 +13,11 @@ package org.streetcomb.coverage;
  * @param doubtOdds a drive over the streets is believable when the most probable drive is at most this many
  *                  times more probable; the stretches of every believable drive are credited (1: the most
  *                  probable drive only, as Newson &amp; Krumm's Viterbi path)
+ * @param driftWindow seconds over which the receiver's slowly varying error (drift) is estimated and taken
+ *                  out before the final match (0: not taken out)
  */
 public record MatchSettings(double sigma, double radius, double beta, double maxGap, double maxSpeed,
-                            double doubtOdds) {
+                            double doubtOdds, double driftWindow) {
 
     public static final double DEFAULT_SIGMA = 10;
     public static final double DEFAULT_RADIUS = 50;
@@ -31,8 +33,18 @@ public record MatchSettings(double sigma, double radius, double beta, double max
      */
     public static final double DEFAULT_DOUBT_ODDS = 20;
 
+    /**
+     * Off: on noise that does not persist, taking out an estimated drift costs a little precision; where
+     * the receiver's error persists (for a minute, say) a window of 60 s gains more (docs/quality.md).
+     */
+    public static final double DEFAULT_DRIFT_WINDOW = 0;
+
     public MatchSettings withDoubtOdds(double odds) {
-        return new MatchSettings(sigma, radius, beta, maxGap, maxSpeed, odds);
+        return new MatchSettings(sigma, radius, beta, maxGap, maxSpeed, odds, driftWindow);
+    }
+
+    public MatchSettings withDriftWindow(double seconds) {
+        return new MatchSettings(sigma, radius, beta, maxGap, maxSpeed, doubtOdds, seconds);
     }
 
     /** The natural log of {@link #doubtOdds}: how much log-probability a believable drive may lose. */
@@ -42,13 +54,14 @@ public record MatchSettings(double sigma, double radius, double beta, double max
 
     public static MatchSettings defaults() {
         return new MatchSettings(DEFAULT_SIGMA, DEFAULT_RADIUS, DEFAULT_BETA, DEFAULT_MAX_GAP, DEFAULT_MAX_SPEED,
-                DEFAULT_DOUBT_ODDS);
+                DEFAULT_DOUBT_ODDS, DEFAULT_DRIFT_WINDOW);
     }
 
     public MatchSettings {
         if (!(sigma > 0) || !(radius > 0) || !(beta > 0) || !(maxGap > 0) || !(maxSpeed > 0)
-                || !(doubtOdds >= 1) || !Double.isFinite(sigma + radius + beta + maxGap + maxSpeed + doubtOdds)) {
-            throw new IllegalArgumentException("matching parameters must be finite, positive, and the odds at least 1");
+                || !(doubtOdds >= 1) || !(driftWindow >= 0)
+                || !Double.isFinite(sigma + radius + beta + maxGap + maxSpeed + doubtOdds + driftWindow)) {
+            throw new IllegalArgumentException("matching parameters must be finite, positive (the drift window may be 0), and the odds at least 1");
         }
     }
 }

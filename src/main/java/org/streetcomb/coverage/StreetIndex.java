@@ -16,7 +16,7 @@ import org.streetcomb.network.StreetNetwork;
 public final class StreetIndex {
 
     /** The nearest points of the edges near a fix, in edge id order. */
-    public record Hits(int count, int[] edge, double[] offset, double[] distance) {
+    public record Hits(int count, int[] edge, double[] offset, double[] distance, double[] nearX, double[] nearY) {
     }
 
     private final StreetNetwork network;
@@ -30,6 +30,8 @@ public final class StreetIndex {
     private final double[] scale;
     private final double[] best;
     private final double[] bestOffset;
+    private final double[] bestX;
+    private final double[] bestY;
     private final int[] bestStamp;
     private int stamp;
     private int[] found = new int[16];
@@ -63,6 +65,8 @@ public final class StreetIndex {
         tree.build();
         best = new double[m];
         bestOffset = new double[m];
+        bestX = new double[m];
+        bestY = new double[m];
         bestStamp = new int[m];
     }
 
@@ -98,6 +102,8 @@ public final class StreetIndex {
             if (d < best[e]) {
                 best[e] = d;
                 bestOffset[e] = (along[p] + t * (along[p + 1] - along[p])) * scale[e];
+                bestX[e] = ax + t * dx;
+                bestY[e] = ay + t * dy;
             }
         });
         int k = count[0];
@@ -105,11 +111,15 @@ public final class StreetIndex {
         Arrays.sort(edges);
         double[] offsets = new double[k];
         double[] distances = new double[k];
+        double[] nearX = new double[k];
+        double[] nearY = new double[k];
         for (int i = 0; i < k; i++) {
             offsets[i] = Math.min(bestOffset[edges[i]], network.length(edges[i]));
             distances[i] = best[edges[i]];
+            nearX[i] = bestX[edges[i]];
+            nearY[i] = bestY[edges[i]];
         }
-        return new Hits(k, edges, offsets, distances);
+        return new Hits(k, edges, offsets, distances, nearX, nearY);
     }
 
     private int edgeOfPoint(int p) {

@@ -1,6 +1,7 @@
 package org.streetcomb.coverage;
 
 import java.util.List;
+import org.streetcomb.network.LocalFrame;
 import org.streetcomb.network.StreetNetwork;
 import org.streetcomb.read.TrackSegment;
 
@@ -18,6 +19,13 @@ public final class TrackCoverage {
     private final DrivenIntervals driven;
     private final MatchTally tally = new MatchTally();
     private final List<int[]> pockets;
+    private final StreetIndex index;
+    private final double driftWindow;
+    /**
+     * Drift estimates made in turn, each from the match of the fixes the previous one corrected: a first
+     * match misled by the drift (along two parallel streets) biases the first estimate towards zero.
+     */
+    static final int DRIFT_PASSES = 2;
 
     /** A dead-end structure up to this many sigmas across is a turning pocket, credited whole once entered. */
     static final double POCKET_SIGMAS = 4;
@@ -25,7 +33,8 @@ public final class TrackCoverage {
     public TrackCoverage(StreetNetwork network, MatchSettings settings) {
         this.network = network;
         this.cleaner = new TrackCleaner(settings.sigma(), settings.maxSpeed());
-        StreetIndex index = new StreetIndex(network);
+        this.index = new StreetIndex(network);
+        this.driftWindow = settings.driftWindow();
         this.pockets = TurningPockets.of(network, index.frame(), POCKET_SIGMAS * settings.sigma());
         this.matcher = new HmmMapMatcher(network, index, settings, TurningPockets.nodes(network, pockets));
         this.driven = new DrivenIntervals(network);
@@ -39,11 +48,65 @@ public final class TrackCoverage {
         tally.splits += cleaned.splits();
         tally.thinned += cleaned.thinned();
         for (int[] run : cleaned.runs()) {
-            matcher.match(segment, run, driven, tally);
+            TrackSegment corrected = segment;
+            for (int pass = 0; driftWindow > 0 && pass < DRIFT_PASSES; pass++) {
+                corrected = withoutDrift(corrected, run);
+            }
+            matcher.match(corrected, run, driven, tally);
         }
     }
 
     /** Counts so far. */
+    /**
+     * The segment with each fix of the run moved back by the receiver's drift: the mean offset, over the
+     * fixes within the drift window of it, of the fixes from where a first, plain match puts them. GPS
+     * errors persist (multipath, atmosphere), and a lasting offset of 10 m makes a drive along one of two
+     * streets 20 m apart fit the other; over a minute the matched streets run in enough directions for
+     * their mean offset to show the drift, while noise that does not persist averages out. Timeless
+     * segments are left as they are.
+     */
+    private TrackSegment withoutDrift(TrackSegment segment, int[] run) {
+        for (int i : run) {
+            if (!segment.timed(i)) {
+                return segment;
+            }
+        }
+        double[][] residual = matcher.residuals(segment, run);
+        double[] lon = segment.lon().clone();
+        double[] lat = segment.lat().clone();
+        LocalFrame frame = index.frame();
+        int lo = 0, hi = 0;
+        double sx = 0, sy = 0;
+        int count = 0;
+        for (int r = 0; r < run.length; r++) {
+            double t = segment.time()[run[r]];
+            while (hi < run.length && segment.time()[run[hi]] <= t + driftWindow) {
+                int i = run[hi++];
+                if (!Double.isNaN(residual[0][i])) {
+                    sx += residual[0][i];
+                    sy += residual[1][i];
+                    count++;
+                }
+            }
+            while (segment.time()[run[lo]] < t - driftWindow) {
+                int i = run[lo++];
+                if (!Double.isNaN(residual[0][i])) {
+                    sx -= residual[0][i];
+                    sy -= residual[1][i];
+                    count--;
+                }
+            }
+            if (count > 0) {
+                int i = run[r];
+                double x = frame.x(lon[i]) - sx / count;
+                double y = frame.y(lat[i]) - sy / count;
+                lon[i] = frame.lon(x);
+                lat[i] = frame.lat(y);
+            }
+        }
+        return new TrackSegment(segment.file(), segment.place(), lon, lat, segment.time());
+    }
+
     public MatchTally tally() {
         return tally;
     }

@@ -16,7 +16,7 @@ import org.streetcomb.read.RoadFeature;
  * extract): precision and recall of "not covered" per street against the streets the crew really skipped.
  * The drive: 20-40 km/h drawn per street, a fix every 1-5 s (drawn per fix), Gaussian noise of the stated
  * sigma east and north, and on average every 5 minutes a dropout of 2-10 s. The audit runs with the
- * default settings (sigma 10 m, doubt odds 20) whatever the true noise. Writes the table to
+ * default settings (sigma 10 m, doubt odds 20, no drift correction) whatever the true noise. Writes the table to
  * target/quality/coverage-*.md. The default doubt odds were chosen on seeds 1-10; docs/quality.md also
  * gives seeds 11-30, which played no part in the choice (rerun with -Dcoverage.seeds=11-30).
  */
@@ -29,6 +29,10 @@ class SkippedStreetSimulationTest {
     static final double ODDS = Double.parseDouble(System.getProperty("coverage.odds",
             String.valueOf(MatchSettings.DEFAULT_DOUBT_ODDS)));
     static final double SKIP_SHARE = 0.1;
+
+    /** The audit's drift window, seconds (default: the command's; 0 turns it off). */
+    static final double DRIFT = Double.parseDouble(System.getProperty("coverage.drift-window",
+            String.valueOf(MatchSettings.DEFAULT_DRIFT_WINDOW)));
 
     /** Correlation time of the simulated noise, seconds (default 0: independent from fix to fix). */
     static final double NOISE_MEMORY = Double.parseDouble(System.getProperty("coverage.noise-memory", "0"));
@@ -67,7 +71,7 @@ class SkippedStreetSimulationTest {
             String[] range = SEEDS.split("-");
             long first = Long.parseLong(range[0]), last = Long.parseLong(range[1]);
             for (long seed = first; seed <= last; seed++) {
-                total = total.plus(SkippedStreetStudy.run(lines, SKIP_SHARE, drive(sigma), MatchSettings.defaults().withDoubtOdds(ODDS), seed));
+                total = total.plus(SkippedStreetStudy.run(lines, SKIP_SHARE, drive(sigma), MatchSettings.defaults().withDoubtOdds(ODDS).withDriftWindow(DRIFT), seed));
             }
             rows.add(String.format(Locale.ROOT, "| %s | %.0f | %s | %d | %d | %d | %d | %d | %.3f | %.3f | %.3f | %.3f |",
                     name, sigma, SEEDS, total.streets(), total.truePositive() + total.falseNegative(),
