@@ -2,19 +2,18 @@ package org.streetcomb.coverage;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
+import static org.streetcomb.coverage.MetreStreets.LAT;
+import static org.streetcomb.coverage.MetreStreets.M_LAT;
+import static org.streetcomb.coverage.MetreStreets.street;
 
 import java.util.ArrayList;
 import java.util.List;
-import java.util.Map;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.ValueSource;
-import org.locationtech.jts.geom.Coordinate;
-import org.locationtech.jts.geom.GeometryFactory;
 import org.streetcomb.network.NetworkBuilder;
 import org.streetcomb.network.StreetNetwork;
 import org.streetcomb.read.RoadFeature;
 import org.streetcomb.read.TrackSegment;
-import org.streetcomb.read.Travel;
 import org.streetcomb.tour.Tour;
 
 /**
@@ -25,10 +24,6 @@ import org.streetcomb.tour.Tour;
  */
 class DoubtOddsTest {
 
-    private static final GeometryFactory GEOMETRY = new GeometryFactory();
-    private static final double LAT = 44.5;
-    private static final double M_LON = 1 / (Math.PI / 180 * 6_371_008.8 * Math.cos(Math.toRadians(LAT)));
-    private static final double M_LAT = 1 / (Math.PI / 180 * 6_371_008.8);
 
     private static final List<RoadFeature> STREETS = List.of(
             street("main", 0, 0, 200, 0, 260, 0, 600, 0),
@@ -121,12 +116,4 @@ class DoubtOddsTest {
         return new Tour(0, edges, forward, new boolean[edges.length]);
     }
 
-    /** A street from metre coordinates (east, north) around an invented point in the Atlantic. */
-    private static RoadFeature street(String id, double... xy) {
-        Coordinate[] c = new Coordinate[xy.length / 2];
-        for (int i = 0; i < c.length; i++) {
-            c[i] = new Coordinate(-31.0 + xy[2 * i] * M_LON, LAT + xy[2 * i + 1] * M_LAT);
-        }
-        return new RoadFeature(id, id, GEOMETRY.createLineString(c), Travel.BOTH, true, Map.of());
-    }
 }

@@ -1,20 +1,19 @@
 package org.streetcomb.coverage;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.streetcomb.coverage.MetreStreets.LAT;
+import static org.streetcomb.coverage.MetreStreets.M_LAT;
+import static org.streetcomb.coverage.MetreStreets.M_LON;
+import static org.streetcomb.coverage.MetreStreets.street;
 
 import java.nio.file.Path;
 import java.util.List;
-import java.util.Map;
 import java.util.Random;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.ValueSource;
-import org.locationtech.jts.geom.Coordinate;
-import org.locationtech.jts.geom.GeometryFactory;
 import org.streetcomb.network.NetworkBuilder;
 import org.streetcomb.network.StreetNetwork;
-import org.streetcomb.read.RoadFeature;
 import org.streetcomb.read.TrackSegment;
-import org.streetcomb.read.Travel;
 
 /**
  * A receiver whose error persists (drift) on invented streets with a simulated drive (invented data): a
@@ -26,10 +25,6 @@ import org.streetcomb.read.Travel;
  */
 class DriftTest {
 
-    private static final GeometryFactory GEOMETRY = new GeometryFactory();
-    private static final double LAT = 44.5;
-    private static final double M_LON = 1 / (Math.PI / 180 * 6_371_008.8 * Math.cos(Math.toRadians(LAT)));
-    private static final double M_LAT = 1 / (Math.PI / 180 * 6_371_008.8);
 
     @ParameterizedTest(name = "seed {0}")
     @ValueSource(longs = {1, 2, 3, 4})
@@ -42,7 +37,7 @@ class DriftTest {
         double[] lon = new double[400], lat = new double[400], time = new double[400];
         double speed = 30 / 3.6;
         for (double x = -600; x <= 1200; x += 2 * speed) {
-            lon[n] = -31.0 + (x + 3 * random.nextGaussian()) * M_LON;
+            lon[n] = MetreStreets.LON + (x + 3 * random.nextGaussian()) * M_LON;
             lat[n] = LAT + (9 + 3 * random.nextGaussian()) * M_LAT;
             time[n] = SimulatedDrive.START + (x + 600) / speed;
             n++;
@@ -63,11 +58,4 @@ class DriftTest {
                 .orElseThrow().status();
     }
 
-    private static RoadFeature street(String id, double... xy) {
-        Coordinate[] c = new Coordinate[xy.length / 2];
-        for (int i = 0; i < c.length; i++) {
-            c[i] = new Coordinate(-31.0 + xy[2 * i] * M_LON, LAT + xy[2 * i + 1] * M_LAT);
-        }
-        return new RoadFeature(id, id, GEOMETRY.createLineString(c), Travel.BOTH, true, Map.of());
-    }
 }

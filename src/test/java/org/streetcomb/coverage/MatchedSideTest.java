@@ -2,16 +2,14 @@ package org.streetcomb.coverage;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
+import static org.streetcomb.coverage.MetreStreets.street;
 
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.Comparator;
 import java.util.List;
-import java.util.Map;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.CsvSource;
-import org.locationtech.jts.geom.Coordinate;
-import org.locationtech.jts.geom.GeometryFactory;
 import org.streetcomb.network.NetworkBuilder;
 import org.streetcomb.network.StreetNetwork;
 import org.streetcomb.read.RoadFeature;
@@ -27,19 +25,7 @@ import org.streetcomb.tour.Tour;
  */
 class MatchedSideTest {
 
-    private static final GeometryFactory GEOMETRY = new GeometryFactory();
-    private static final double LAT = 44.5;
-    private static final double M_LON = 1 / (Math.PI / 180 * 6_371_008.8 * Math.cos(Math.toRadians(LAT)));
-    private static final double M_LAT = 1 / (Math.PI / 180 * 6_371_008.8);
 
-    /** A street from metre coordinates (east, north) around an invented point in the Atlantic. */
-    private static RoadFeature street(String id, Travel travel, double... xy) {
-        Coordinate[] c = new Coordinate[xy.length / 2];
-        for (int i = 0; i < c.length; i++) {
-            c[i] = new Coordinate(-31.0 + xy[2 * i] * M_LON, LAT + xy[2 * i + 1] * M_LAT);
-        }
-        return new RoadFeature(id, id, GEOMETRY.createLineString(c), travel, true, Map.of());
-    }
 
     /** Main road west to east with a service road 15 m north of its middle 600 m, joined at both ends. */
     private static final List<RoadFeature> PARALLEL = List.of(

@@ -1,20 +1,19 @@
 package org.streetcomb.coverage;
 
 import static org.junit.jupiter.api.Assertions.assertTrue;
+import static org.streetcomb.coverage.MetreStreets.LAT;
+import static org.streetcomb.coverage.MetreStreets.M_LAT;
+import static org.streetcomb.coverage.MetreStreets.M_LON;
+import static org.streetcomb.coverage.MetreStreets.street;
 
 import java.nio.file.Path;
 import java.util.List;
-import java.util.Map;
 import java.util.Random;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.ValueSource;
-import org.locationtech.jts.geom.Coordinate;
-import org.locationtech.jts.geom.GeometryFactory;
 import org.streetcomb.network.NetworkBuilder;
 import org.streetcomb.network.StreetNetwork;
-import org.streetcomb.read.RoadFeature;
 import org.streetcomb.read.TrackSegment;
-import org.streetcomb.read.Travel;
 
 /**
  * A crew that turns back in the middle of a street (at roadworks, say) has driven only the stretch up to
@@ -25,10 +24,6 @@ import org.streetcomb.read.Travel;
  */
 class MidStreetTurnTest {
 
-    private static final GeometryFactory GEOMETRY = new GeometryFactory();
-    private static final double LAT = 44.5;
-    private static final double M_LON = 1 / (Math.PI / 180 * 6_371_008.8 * Math.cos(Math.toRadians(LAT)));
-    private static final double M_LAT = 1 / (Math.PI / 180 * 6_371_008.8);
 
     @ParameterizedTest(name = "seed {0}")
     @ValueSource(longs = {1, 2, 3, 4, 5, 6})
@@ -53,7 +48,7 @@ class MidStreetTurnTest {
         }
         double[] lon = new double[n], lat = new double[n], time = new double[n];
         for (int i = 0; i < n; i++) {
-            lon[i] = -31.0 + x[i] * M_LON;
+            lon[i] = MetreStreets.LON + x[i] * M_LON;
             lat[i] = LAT + y[i] * M_LAT;
             time[i] = SimulatedDrive.START + t[i];
         }
@@ -65,11 +60,4 @@ class MidStreetTurnTest {
         assertTrue(street.driven() > 500 - 42 - 15 && street.driven() < 500 + 15, "credited " + street.driven() + " m");
     }
 
-    private static RoadFeature street(String id, double... xy) {
-        Coordinate[] c = new Coordinate[xy.length / 2];
-        for (int i = 0; i < c.length; i++) {
-            c[i] = new Coordinate(-31.0 + xy[2 * i] * M_LON, LAT + xy[2 * i + 1] * M_LAT);
-        }
-        return new RoadFeature(id, id, GEOMETRY.createLineString(c), Travel.BOTH, true, Map.of());
-    }
 }
