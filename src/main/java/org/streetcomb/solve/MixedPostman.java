@@ -39,6 +39,13 @@ public final class MixedPostman {
     /** Flip trials are also limited to this many edge-solves in all, so large networks stay fast. */
     static final int FLIP_WORK = 100_000;
 
+    /** Time and rounds for the LP bound's cutting planes. */
+    static final double LP_SECONDS = 10;
+    static final int LP_ROUNDS = 500;
+
+    /** A tour within this share of the bound counts as optimal: the LP solver's relative tolerance, twice. */
+    static final double CERTIFIED = 2e-6;
+
     private MixedPostman() {
     }
 
@@ -65,16 +72,34 @@ public final class MixedPostman {
         Oriented oriented = inOutDegree(problem, along, against, demand.either());
         evenParity(network, oriented);
         orientAlongTrails(network, oriented);
-        // service directions now fixed: the connecting passes and the flow are re-solved together
+        MixedLpBound.Result lp = MixedLpBound.solve(problem, LP_SECONDS, LP_ROUNDS);
+        // service directions now fixed: the connecting passes and the flow are re-solved together, for
+        // MIXED2's orientation and for the LP's (where it leans one way), keeping the shorter
         int[] serviceAlong = along.clone();
         int[] serviceAgainst = against.clone();
+        int[] lpAlong = along.clone();
+        int[] lpAgainst = against.clone();
         for (int e = 0; e < m; e++) {
             if (demand.either()[e] > 0) {
                 boolean forward = oriented.along[e] >= oriented.against[e];
                 (forward ? serviceAlong : serviceAgainst)[e] += demand.either()[e];
+                if (lp != null && Math.abs(lp.along()[e] - lp.against()[e]) > 1e-6) {
+                    forward = lp.along()[e] > lp.against()[e];
+                }
+                (forward ? lpAlong : lpAgainst)[e] += demand.either()[e];
             }
         }
         DirectedPostman.Balanced best = DirectedPostman.balanced(problem, serviceAlong, serviceAgainst);
+        String start = "MIXED2";
+        if (lp != null) {
+            DirectedPostman.Balanced guided = DirectedPostman.balanced(problem, lpAlong, lpAgainst);
+            if (guided.traversals().length(network) < best.traversals().length(network) - 1e-9) {
+                best = guided;
+                serviceAlong = lpAlong;
+                serviceAgainst = lpAgainst;
+                start = "LP-guided";
+            }
+        }
         int flips = 0;
         int tried = 0;
         int budget = Math.min(FLIPS, Math.max(10, FLIP_WORK / Math.max(1, m)));
@@ -102,10 +127,16 @@ public final class MixedPostman {
         double service = demand.length(network);
         double total = best.traversals().length(network);
         double bound = lowerBound(problem);
+        String boundMethod = "undirected and flow relaxations";
+        if (lp != null && lp.bound() > bound) {
+            bound = lp.bound();
+            boundMethod = lp.describe();
+        }
         String method = "mixed postman, heuristic (" + connection + "Frederickson's MIXED2 orientation, "
-                + "exact re-balancing by minimum-cost flow, " + flips + " of " + tried + " direction flips kept)";
+                + "exact re-balancing by minimum-cost flow, " + start + " orientation kept, " + flips + " of " + tried + " direction flips kept; "
+                + "bound: " + boundMethod + ")";
         return new Augmentation(best.traversals(), total - service, UndirectedPostman.oddNodes(network).length, method,
-                total <= bound + 1e-9 * Math.max(1, total), bound);
+                total <= bound + CERTIFIED * Math.max(1, total), bound);
     }
 
     /**

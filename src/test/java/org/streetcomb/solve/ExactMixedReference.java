@@ -22,8 +22,8 @@ import org.streetcomb.read.Travel;
  */
 public final class ExactMixedReference {
 
-    /** Traversals per street and direction at most this many: far above what an optimum uses here. */
-    private static final int MAX_TRAVERSALS = 6;
+    /** Traversals per street and direction at most this many: far above what an optimum uses here (Monaco's core needs more than 6). */
+    private static final int MAX_TRAVERSALS = 64;
 
     public record Result(double optimum, double bestBound, boolean proved) {
     }
@@ -63,6 +63,7 @@ public final class ExactMixedReference {
         solver.getParameters().setMaxTimeInSeconds(seconds);
         solver.getParameters().setNumWorkers(2);
         solver.getParameters().setRandomSeed(1);
+        solver.getParameters().setLogSearchProgress(System.getProperty("cplog") != null);
         CpSolverStatus status = solver.solve(model);
         if (status != CpSolverStatus.OPTIMAL && status != CpSolverStatus.FEASIBLE) {
             throw new IllegalStateException("reference model not solved: " + status);
