@@ -1,5 +1,6 @@
 package org.streetcomb.cli;
 
+import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.JsonNodeFactory;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.nio.file.Path;
@@ -16,7 +17,7 @@ import org.streetcomb.tour.TrafficSide;
 import org.streetcomb.tour.TurnAwareOrder;
 import org.streetcomb.tour.TurnCounts;
 import org.streetcomb.trip.Trip;
-import org.streetcomb.trip.TripPlanner;
+import org.streetcomb.fleet.Fleet;
 import org.streetcomb.write.DirectionSheetWriter;
 import org.streetcomb.write.GpxLimits;
 import org.streetcomb.write.GpxTourWriter;
@@ -73,7 +74,7 @@ public final class FieldOutputOptions {
 
     private EdgeBearings bearings;
     private TurnCounts plainCounts;
-    private TripPlanner.Result trips;
+    private Fleet trips;
 
     /** Checks the option values; call before planning so a bad value fails fast. */
     void check(CommandLine commandLine) {
@@ -140,9 +141,10 @@ public final class FieldOutputOptions {
         ObjectNode json = JsonNodeFactory.instance.objectNode();
         if (trips != null) {
             List<Trip> ordered = new ArrayList<>();
+            List<Trip> cut = trips.trips();
             for (int t = 0; t < tours.size(); t++) {
-                Trip cut = trips.trips().get(t);
-                ordered.add(new Trip(tours.get(t), cut.length(), cut.service(), cut.demand(), cut.overLimit()));
+                ordered.add(new Trip(tours.get(t), cut.get(t).length(), cut.get(t).service(), cut.get(t).demand(),
+                        cut.get(t).overLimit()));
             }
             tripOptions.report(trips, ordered, json, text);
         }
@@ -169,20 +171,33 @@ public final class FieldOutputOptions {
                     "reordered for fewer turns from %d U-turns, %d crossing turns, %d straight on; same length",
                     plainCounts.uTurns(), plainCounts.crossingTurns(), plainCounts.straightOns())});
         }
+        List<int[]> groups = groups(tours.size());
         if (gpx != null) {
-            GpxTourWriter.Written written = clock.time("gpx", () -> new GpxTourWriter(
-                    new GpxLimits(simplify, trackPoints, routePoints, routes))
-                    .write(gpx, plan.network(), plan.depot(), tours, sheets, label));
-            ObjectNode node = json.putObject("gpx");
-            node.put("file", gpx.toString());
-            node.put("tracks", written.tracks());
-            node.put("track_points", written.trackPoints());
-            node.put("routes", written.routes());
-            node.put("route_points", written.routePoints());
-            node.put("waypoints", written.waypoints());
-            text.add(new String[] {"GPX", String.format(Locale.ROOT, "%s: %d track(s) with %d points%s, %d waypoint(s)",
-                    gpx, written.tracks(), written.trackPoints(), routes ? String.format(Locale.ROOT,
-                    ", %d route(s) with %d points", written.routes(), written.routePoints()) : "", written.waypoints())});
+            ArrayNode files = json.putArray("gpx_files");
+            for (int g = 0; g < groups.size(); g++) {
+                int[] range = groups.get(g);
+                if (range[0] == range[1]) {
+                    continue;
+                }
+                Path file = groups.size() == 1 ? gpx : perVehicle(gpx, g + 1);
+                GpxTourWriter.Written written = clock.time("gpx", () -> new GpxTourWriter(
+                        new GpxLimits(simplify, trackPoints, routePoints, routes))
+                        .write(file, plan.network(), plan.depot(), tours.subList(range[0], range[1]),
+                                sheets.subList(range[0], range[1]), label));
+                ObjectNode node = files.addObject();
+                if (!json.has("gpx")) {
+                    json.set("gpx", node);
+                }
+                node.put("file", file.toString());
+                node.put("tracks", written.tracks());
+                node.put("track_points", written.trackPoints());
+                node.put("routes", written.routes());
+                node.put("route_points", written.routePoints());
+                node.put("waypoints", written.waypoints());
+                text.add(new String[] {"GPX", String.format(Locale.ROOT, "%s: %d track(s) with %d points%s, %d waypoint(s)",
+                        file, written.tracks(), written.trackPoints(), routes ? String.format(Locale.ROOT,
+                        ", %d route(s) with %d points", written.routes(), written.routePoints()) : "", written.waypoints())});
+            }
         }
         if (kml != null) {
             clock.run("kml", () -> new KmlTourWriter(simplify).write(kml, plan.network(), plan.depot(), tours, label));
@@ -190,12 +205,51 @@ public final class FieldOutputOptions {
             text.add(new String[] {"KML", kml.toString()});
         }
         if (directions != null) {
-            clock.run("directions", () -> DirectionSheetWriter.write(directions, sheets, label));
-            json.put("directions", directions.toString());
-            int lines = sheets.stream().mapToInt(List::size).sum();
-            text.add(new String[] {"Sheet", String.format(Locale.ROOT, "%s: %d lines", directions, lines)});
+            ArrayNode files = json.putArray("directions_files");
+            for (int g = 0; g < groups.size(); g++) {
+                int[] range = groups.get(g);
+                if (range[0] == range[1]) {
+                    continue;
+                }
+                Path file = groups.size() == 1 ? directions : perVehicle(directions, g + 1);
+                List<List<Direction>> mine = sheets.subList(range[0], range[1]);
+                clock.run("directions", () -> DirectionSheetWriter.write(file, mine, label));
+                if (!json.has("directions")) {
+                    json.put("directions", file.toString());
+                }
+                files.add(file.toString());
+                int lines = mine.stream().mapToInt(List::size).sum();
+                text.add(new String[] {"Sheet", String.format(Locale.ROOT, "%s: %d lines", file, lines)});
+            }
         }
         return new PlanSummary.Section("field", json, text);
+    }
+
+    /**
+     * The tours written to one file each: every vehicle's trips when a fleet of several vehicles was planned,
+     * else all tours together; as {from, to} index ranges into the tours.
+     */
+    private List<int[]> groups(int tours) {
+        List<int[]> groups = new ArrayList<>();
+        if (trips == null || trips.vehicles().size() == 1) {
+            groups.add(new int[] {0, tours});
+            return groups;
+        }
+        int from = 0;
+        for (var day : trips.vehicles()) {
+            groups.add(new int[] {from, from + day.trips().size()});
+            from += day.trips().size();
+        }
+        return groups;
+    }
+
+    /** {@code name.ext} becomes {@code name-vehicle-N.ext}: one file per vehicle. */
+    static Path perVehicle(Path file, int vehicle) {
+        String name = file.getFileName().toString();
+        int dot = name.lastIndexOf('.');
+        String renamed = dot > 0 ? name.substring(0, dot) + "-vehicle-" + vehicle + name.substring(dot)
+                : name + "-vehicle-" + vehicle;
+        return file.resolveSibling(renamed);
     }
 
     private static double round(double value) {

@@ -4,6 +4,7 @@ import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.math.BigDecimal;
 import java.math.RoundingMode;
+import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 import org.streetcomb.InputError;
@@ -11,6 +12,11 @@ import org.streetcomb.plan.Plan;
 import org.streetcomb.trip.Trip;
 import org.streetcomb.trip.TripLimit;
 import org.streetcomb.trip.TripPlanner;
+import org.streetcomb.fleet.Fleet;
+import org.streetcomb.fleet.FleetPlanner;
+import org.streetcomb.fleet.FleetSettings;
+import org.streetcomb.fleet.ServiceOverlap;
+import org.streetcomb.fleet.VehicleDay;
 import picocli.CommandLine;
 import picocli.CommandLine.Option;
 
@@ -27,9 +33,14 @@ public final class TripOptions {
     Double maxHours;
 
     @Option(names = "--vehicles", paramLabel = "K",
-            description = "Cut the tour into at most K trips, one per vehicle, keeping the longest as short as "
-                    + "possible (by duration when --max-trip-hours is given, else by length).")
+            description = "Share the streets among K vehicles, each working an area of its own around the depot and "
+                    + "driving as many trips as the trip limit needs (default: 1).")
     Integer vehicles;
+
+    @Option(names = "--shift-hours", paramLabel = "HOURS",
+            description = "Each vehicle's trips together may take at most this many hours; the summary says by how "
+                    + "much the fleet falls short when they do not fit.")
+    Double shiftHours;
 
     @Option(names = "--service-speed", paramLabel = "KMH", defaultValue = "10",
             description = "Average speed while servicing, for trip durations (default: ${DEFAULT-VALUE} km/h).")
@@ -39,20 +50,22 @@ public final class TripOptions {
             description = "Average speed on deadhead, for trip durations (default: ${DEFAULT-VALUE} km/h).")
     double travelSpeed;
 
-    @Option(names = "--trip-restarts", paramLabel = "N", defaultValue = "20",
-            description = "Search effort when cutting trips: each unit breeds 25 more candidate solutions; "
-                    + "more can find shorter trips, 0 only improves the tour's own order (default: ${DEFAULT-VALUE}).")
-    int restarts;
+    @Option(names = "--trip-restarts", paramLabel = "N",
+            description = "Search effort when cutting trips: each unit breeds 25 more candidate solutions; more can "
+                    + "find shorter trips, 0 only improves the tour's own order (default: " + TripPlanner.DEFAULT_RESTARTS
+                    + " for a vehicle's " + TripPlanner.LARGE_TASKS + " streets or fewer, 0 beyond).")
+    Integer restarts;
 
     boolean requested() {
-        return maxKm != null || maxHours != null || vehicles != null;
+        return maxKm != null || maxHours != null || vehicles != null || shiftHours != null;
     }
 
     void check(CommandLine commandLine) {
         if (maxKm != null && maxHours != null) {
             throw new CommandLine.ParameterException(commandLine, "give --max-trip-km or --max-trip-hours, not both");
         }
-        if ((maxKm != null && !(maxKm > 0)) || (maxHours != null && !(maxHours > 0))) {
+        if ((maxKm != null && !(maxKm > 0)) || (maxHours != null && !(maxHours > 0))
+                || (shiftHours != null && !(shiftHours > 0))) {
             throw new CommandLine.ParameterException(commandLine, "trip limits must be above 0");
         }
         if (vehicles != null && (vehicles < 1 || vehicles > 1000)) {
@@ -61,13 +74,13 @@ public final class TripOptions {
         if (!(serviceSpeed > 0) || !(travelSpeed > 0)) {
             throw new CommandLine.ParameterException(commandLine, "speeds must be above 0 km/h");
         }
-        if (restarts < 0) {
+        if (restarts != null && restarts < 0) {
             throw new CommandLine.ParameterException(commandLine, "--trip-restarts must be 0 or more");
         }
     }
 
-    /** The trips of the plan's single tour from the depot. */
-    TripPlanner.Result cut(Plan plan) {
+    /** The fleet's day planned over the plan's single tour from the depot. */
+    Fleet cut(Plan plan) {
         if (plan.tours().size() != 1 || plan.tours().get(0).start() != plan.depot()) {
             throw new InputError(plan.request().input() + ": trips must start at the depot, but the network has "
                     + plan.components().count() + " separate parts: add --depot-part-only to cut the depot's part "
@@ -76,13 +89,12 @@ public final class TripOptions {
         TripLimit limit = maxKm != null ? TripLimit.length(maxKm * 1000)
                 : maxHours != null ? TripLimit.hours(maxHours, serviceSpeed, travelSpeed)
                 : TripLimit.length(Double.POSITIVE_INFINITY);
-        return new TripPlanner(plan.network(), plan.depot(),
-                new TripPlanner.Settings(limit, vehicles == null ? 0 : vehicles, restarts, 1)).plan(plan.tours().get(0), null);
+        FleetSettings settings = new FleetSettings(vehicles == null ? 1 : vehicles, limit,
+                shiftHours == null ? Double.POSITIVE_INFINITY : shiftHours, serviceSpeed, travelSpeed,
+                restarts == null ? TripPlanner.AUTO : restarts, 1);
+        return new FleetPlanner(plan.network(), plan.depot(), settings).plan(plan.tours().get(0), null);
     }
 
-    double hours(Trip trip) {
-        return trip.service() / (1000 * serviceSpeed) + trip.deadhead() / (1000 * travelSpeed);
-    }
 
     private static int services(Trip trip) {
         int n = 0;
@@ -92,40 +104,82 @@ public final class TripOptions {
         return n;
     }
 
-    /** Summary lines and JSON for the trips. */
-    void report(TripPlanner.Result result, List<Trip> trips, ObjectNode json, List<String[]> text) {
+    /**
+     * Summary lines and JSON for the fleet; {@code driven} are the trips as driven (reordered for turns), vehicle
+     * by vehicle in the fleet's order.
+     */
+    void report(Fleet fleet, List<Trip> driven, ObjectNode json, List<String[]> text) {
         ArrayNode list = json.putArray("trips");
-        double longest = 0;
-        for (int t = 0; t < trips.size(); t++) {
-            Trip trip = trips.get(t);
-            double hours = hours(trip);
-            longest = Math.max(longest, hours);
-            ObjectNode node = list.addObject();
-            node.put("trip", t + 1);
-            node.put("length_m", BigDecimal.valueOf(trip.length()).setScale(3, RoundingMode.HALF_EVEN));
-            node.put("service_m", BigDecimal.valueOf(trip.service()).setScale(3, RoundingMode.HALF_EVEN));
-            node.put("deadhead_share", BigDecimal.valueOf(trip.deadheadShare()).setScale(6, RoundingMode.HALF_EVEN));
-            node.put("hours", BigDecimal.valueOf(hours).setScale(3, RoundingMode.HALF_EVEN));
-            node.put("over_limit", trip.overLimit());
-            text.add(new String[] {"  trip " + (t + 1), String.format(Locale.ROOT,
-                    "%.3f km, %.2f h, deadhead %.1f %%%s", trip.length() / 1000, hours, 100 * trip.deadheadShare(),
-                    trip.overLimit() ? " [over the limit]" : "")});
-            if (trip.overLimit()) {
-                boolean single = services(trip) == 1;
-                text.add(new String[] {"Warning", single
-                        ? "trip " + (t + 1) + " exceeds the limit because one street alone does"
-                        : "trip " + (t + 1) + " exceeds the limit: " + vehicles + " vehicles cannot cover the network "
-                        + "within it; add vehicles or raise the limit"});
+        ArrayNode days = json.putArray("vehicles");
+        List<String[]> lines = new ArrayList<>();
+        int t = 0;
+        boolean several = fleet.vehicles().size() > 1;
+        for (VehicleDay day : fleet.vehicles()) {
+            ObjectNode vehicle = days.addObject();
+            vehicle.put("vehicle", day.vehicle());
+            vehicle.put("trips", day.trips().size());
+            vehicle.put("length_m", scaled(day.length(), 3));
+            vehicle.put("hours", scaled(day.hours(), 3));
+            vehicle.put("hours_over_shift", scaled(Math.max(0, day.hours() - fleet.shiftHours()), 3));
+            if (several) {
+                lines.add(new String[] {"  vehicle " + day.vehicle(), String.format(Locale.ROOT,
+                        "%d trip(s), %.3f km, %.2f h%s", day.trips().size(), day.length() / 1000, day.hours(),
+                        day.hours() > fleet.shiftHours() + 1e-9 ? String.format(Locale.ROOT, " [%.2f h over the shift]",
+                                day.hours() - fleet.shiftHours()) : "")});
+            }
+            for (int i = 0; i < day.trips().size(); i++, t++) {
+                Trip trip = driven.get(t);
+                double hours = fleet.settings().hours(trip);
+                ObjectNode node = list.addObject();
+                node.put("trip", t + 1);
+                node.put("vehicle", day.vehicle());
+                node.put("vehicle_trip", i + 1);
+                node.put("length_m", scaled(trip.length(), 3));
+                node.put("service_m", scaled(trip.service(), 3));
+                node.put("deadhead_share", scaled(trip.deadheadShare(), 6));
+                node.put("hours", scaled(hours, 3));
+                node.put("over_limit", trip.overLimit());
+                lines.add(new String[] {several ? "    trip " + (i + 1) : "  trip " + (t + 1), String.format(Locale.ROOT,
+                        "%.3f km, %.2f h, deadhead %.1f %%%s", trip.length() / 1000, hours, 100 * trip.deadheadShare(),
+                        trip.overLimit() ? " [over the limit]" : "")});
+                if (trip.overLimit() && services(trip) == 1) {
+                    lines.add(new String[] {"Warning", (several ? "vehicle " + day.vehicle() + " trip " + (i + 1) : "trip " + (t + 1))
+                            + " exceeds the limit because one street alone does"});
+                }
             }
         }
-        double total = trips.stream().mapToDouble(Trip::length).sum();
-        text.add(0, new String[] {"Trips", String.format(Locale.ROOT,
-                "%d trips from the depot, %.3f km in all, longest %.2f h (service %.0f km/h, travel %.0f km/h)%s",
-                trips.size(), total / 1000, longest, serviceSpeed, travelSpeed,
-                result.improved() ? "" : "; local improvement skipped: too many streets for the distance table")});
-        json.put("trips_limit", maxKm != null ? maxKm + " km" : maxHours != null ? maxHours + " h" : "none");
-        if (vehicles != null) {
-            json.put("vehicles", vehicles);
+        double total = fleet.length();
+        text.add(new String[] {"Trips", String.format(Locale.ROOT,
+                "%d vehicle(s), %d trip(s) from the depot, %.3f km in all, longest day %.2f h%s (service %.0f km/h, "
+                        + "travel %.0f km/h)%s",
+                fleet.vehicles().size(), fleet.trips().size(), total / 1000, fleet.longestHours(),
+                fleet.shiftHours() < Double.POSITIVE_INFINITY ? String.format(Locale.ROOT, " of a %.2f h shift",
+                        fleet.shiftHours()) : "",
+                serviceSpeed, travelSpeed,
+                fleet.improved() ? "" : "; local improvement skipped: too many streets for the distance table")});
+        text.addAll(lines);
+        if (several) {
+            text.add(new String[] {"Overlap", String.format(Locale.ROOT,
+                    "%.1f %% of the service has another vehicle's streets within %.0f m", 100 * fleet.overlapShare(),
+                    ServiceOverlap.RADIUS_METRES)});
         }
+        if (fleet.hoursOverShift() > 1e-9) {
+            long over = fleet.vehicles().stream().filter(v -> v.hours() > fleet.shiftHours() + 1e-9).count();
+            text.add(new String[] {"Warning", String.format(Locale.ROOT,
+                    "%d vehicle(s) cannot cover the network within a %.2f h shift: %d vehicle(s) over by %.2f h in all "
+                            + "(longest day %.2f h); add vehicles or lengthen the shift",
+                    fleet.vehicles().size(), fleet.shiftHours(), over, fleet.hoursOverShift(), fleet.longestHours())});
+        }
+        json.put("trips_limit", maxKm != null ? maxKm + " km" : maxHours != null ? maxHours + " h" : "none");
+        json.put("vehicle_count", fleet.vehicles().size());
+        if (shiftHours != null) {
+            json.put("shift_hours", shiftHours);
+        }
+        json.put("hours_over_shift", scaled(fleet.hoursOverShift(), 3));
+        json.put("overlap_share", scaled(fleet.overlapShare(), 6));
+    }
+
+    private static BigDecimal scaled(double value, int places) {
+        return BigDecimal.valueOf(value).setScale(places, RoundingMode.HALF_EVEN);
     }
 }

@@ -23,8 +23,8 @@ final class MemeticSearch {
     /** Members of the population, as in the published algorithm, for up to {@link #FULL_SIZE} tasks. */
     static final int POPULATION = 30;
     /**
-     * Tasks up to which the population and the children run in full; beyond, both shrink in proportion, so
-     * a city-sized plan (local search costs grow with tasks times trip length) keeps the default quick.
+     * Tasks up to which the population and the children run in full (every gdb, val and egl instance); beyond,
+     * both shrink with the square of the size, so a town-sized plan keeps the default quick.
      */
     static final int FULL_SIZE = 100;
     /**
@@ -63,9 +63,12 @@ final class MemeticSearch {
      */
     List<int[]> run(List<int[]> first, Supplier<int[]> orders, int budget) {
         int n = TripPlanner.concatenate(first).length;
+        // a decode's local search costs about tasks times trip length, so beyond FULL_SIZE both the population
+        // and the children shrink with the square of the size: a town-sized plan (Aurich, 1,900 tasks) breeds
+        // one child at the default effort and keeps it within seconds; more effort buys more children
         double scale = Math.min(1.0, (double) FULL_SIZE / Math.max(1, n));
-        int size = Math.max(4, (int) Math.round(POPULATION * scale));
-        int children = (int) Math.round(budget * scale);
+        int size = Math.max(2, (int) Math.round(POPULATION * scale * scale));
+        int children = (int) Math.round(budget * scale * scale);
         population.clear();
         population.add(member(first));
         for (int slot = 1; slot < size; slot++) {

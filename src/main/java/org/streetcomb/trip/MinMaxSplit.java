@@ -50,31 +50,36 @@ final class MinMaxSplit {
         return measure.use(trip.service(), trip.closed() - trip.service(), trip.demand());
     }
 
-    /** The fewest trips of measure at most {@code bound} that cover the order, or n + 1 when none do. */
+    /**
+     * The fewest trips of measure at most {@code bound} that cover the order, or n + 1 when none do. Greedy:
+     * each trip takes the longest run that fits. That is optimal because distances are shortest paths, so
+     * dropping a trip's first or last task never makes it dearer (triangle inequality): any cut can be
+     * shifted so every trip reaches as far as the greedy one. O(n) per call.
+     */
     private static int trips(Tasks tasks, Distances distances, int depot, TripLimit measure, double bound, int[] order) {
         int n = order.length;
-        int[] fewest = new int[n + 1];
-        Arrays.fill(fewest, n + 1);
-        fewest[0] = 0;
         TripExtension trip = new TripExtension(tasks, distances, depot);
-        for (int i = 0; i < n; i++) {
-            if (fewest[i] > n) {
-                continue;
-            }
+        int count = 0;
+        int i = 0;
+        while (i < n) {
             trip.begin(order[i]);
-            for (int j = i; j < n; j++) {
-                if (j > i) {
-                    trip.add(order[j]);
-                    if (measure.use(trip.service(), trip.open() - trip.service(), trip.demand()) > bound) {
-                        break;
-                    }
-                }
-                if (measure(measure, trip) <= bound && fewest[i] + 1 < fewest[j + 1]) {
-                    fewest[j + 1] = fewest[i] + 1;
-                }
+            if (measure(measure, trip) > bound) {
+                return n + 1;
             }
+            int j = i + 1;
+            while (j < n) {
+                TripExtension longer = trip.copy();
+                longer.add(order[j]);
+                if (measure(measure, longer) > bound) {
+                    break;
+                }
+                trip = longer;
+                j++;
+            }
+            count++;
+            i = j;
         }
-        return fewest[n];
+        return count;
     }
 
     /** The cheapest cut into at most k trips of measure at most {@code bound}. */

@@ -1,6 +1,7 @@
 package org.streetcomb.trip;
 
 import java.util.Arrays;
+import java.util.function.IntPredicate;
 import org.streetcomb.network.StreetNetwork;
 import org.streetcomb.read.Travel;
 import org.streetcomb.tour.Tour;
@@ -33,6 +34,14 @@ public final class Tasks {
      * @param demandPerEdge what servicing each edge uses of a vehicle's capacity, or null for none
      */
     public static Tasks of(StreetNetwork network, Tour tour, double[] demandPerEdge) {
+        return of(network, tour, demandPerEdge, step -> true);
+    }
+
+    /**
+     * @param demandPerEdge what servicing each edge uses of a vehicle's capacity, or null for none
+     * @param taken         the tour's service steps to take (by step index); the others are left to someone else
+     */
+    public static Tasks of(StreetNetwork network, Tour tour, double[] demandPerEdge, IntPredicate taken) {
         int steps = tour.steps();
         int[] servicePasses = new int[network.edgeCount()];
         for (int i = 0; i < steps; i++) {
@@ -49,7 +58,7 @@ public final class Tasks {
         boolean[] flippable = new boolean[steps];
         for (int i = 0; i < steps; i++) {
             int e = tour.edges()[i];
-            if (!tour.service()[i] || !network.required(e)) {
+            if (!tour.service()[i] || !network.required(e) || !taken.test(i)) {
                 continue;
             }
             edge[n] = e;

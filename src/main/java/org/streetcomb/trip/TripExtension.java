@@ -23,6 +23,17 @@ final class TripExtension {
         this.depot = depot;
     }
 
+    /** An independent copy of this trip so far. */
+    TripExtension copy() {
+        TripExtension c = new TripExtension(tasks, distances, depot);
+        c.best0 = best0;
+        c.best1 = best1;
+        c.last = last;
+        c.service = service;
+        c.demand = demand;
+        return c;
+    }
+
     void begin(int task) {
         last = -1;
         service = 0;

@@ -108,9 +108,13 @@ final class TripLocalSearch {
         int p = positionOf[t];
         int[] one = trips.get(a);
         if (one.length > 1) {
+            // a trip of its own pays only if the saving where it was exceeds the new trip's cost (less any penalty lifted)
+            double removal = distances.between(before(one, p), after(one, p)) - detour(before(one, p), one[p], after(one, p));
+            double lifted = priced(totals.get(a)) - totals.get(a)[0];
             for (int d = 0; d < 2; d++) {
                 int ref = 2 * t + d;
-                if (tasks.allowed(ref) && replace(a, without(one, p), -1, new int[] {ref})) {
+                if (tasks.allowed(ref) && removal + detour(depot, ref, depot) < lifted - EPSILON
+                        && replace(a, without(one, p), -1, new int[] {ref})) {
                     return true;
                 }
             }
@@ -240,7 +244,7 @@ final class TripLocalSearch {
     private boolean withinTrip(int a, int[] trip, int p, int q) {
         // a move within a trip leaves its demand and service as they are: only a shorter trip can pay
         int ref = trip[p];
-        int[] rest = without(trip, p);
+        int restLength = trip.length - 1;
         double removal = distances.between(before(trip, p), after(trip, p)) - detour(before(trip, p), ref, after(trip, p));
         for (int d = 0; d < 2; d++) {
             int moved = (ref & ~1) | d;
@@ -249,10 +253,11 @@ final class TripLocalSearch {
             }
             int at = q > p ? q - 1 : q;
             for (int slot = at; slot <= at + 1; slot++) {
-                int x = slot == 0 ? depot : tasks.end(rest[slot - 1]);
-                int y = slot == rest.length ? depot : tasks.start(rest[slot]);
+                // the trip without p is not built unless the move is screened in: rest[i] is trip[i < p ? i : i + 1]
+                int x = slot == 0 ? depot : tasks.end(trip[slot - 1 < p ? slot - 1 : slot]);
+                int y = slot == restLength ? depot : tasks.start(trip[slot < p ? slot : slot + 1]);
                 if (removal + detour(x, moved, y) - distances.between(x, y) < -EPSILON
-                        && replace(a, with(rest, slot, moved), -1, null)) {
+                        && replace(a, with(without(trip, p), slot, moved), -1, null)) {
                     return true;
                 }
             }

@@ -4,6 +4,7 @@ import java.util.ArrayList;
 import java.util.BitSet;
 import java.util.List;
 import java.util.Random;
+import java.util.function.IntPredicate;
 import java.util.function.Supplier;
 import org.streetcomb.network.DijkstraSearch;
 import org.streetcomb.network.Heading;
@@ -33,7 +34,8 @@ public final class TripPlanner {
      * @param limit    what one trip may use; for k vehicles, the measure that is balanced
      * @param vehicles k for the min-max cut into at most k trips, or 0 to cut by the limit alone
      * @param restarts search effort: 0 only cuts and improves the tour's order; each unit breeds
-     *                 {@link #CHILDREN_PER_RESTART} children of the memetic search
+     *                 {@link #CHILDREN_PER_RESTART} children of the memetic search; {@link #AUTO} for
+     *                 {@link #DEFAULT_RESTARTS} up to {@link #LARGE_TASKS} tasks and 0 beyond
      * @param seed     seed of the randomised giant tours
      */
     public record Settings(TripLimit limit, int vehicles, int restarts, long seed) {
@@ -42,14 +44,26 @@ public final class TripPlanner {
     /**
      * @param trips    the trips in order
      * @param improved whether local improvement ran
+     * @param searched whether the memetic search ran
      * @param tasks    the number of services cut into trips
      */
-    public record Result(List<Trip> trips, boolean improved, int tasks) {
+    public record Result(List<Trip> trips, boolean improved, int tasks, boolean searched) {
 
         public double length() {
             return trips.stream().mapToDouble(Trip::length).sum();
         }
     }
+
+    /** {@link Settings#restarts()} that picks the effort by size. */
+    public static final int AUTO = -1;
+    /** The effort {@link #AUTO} gives up to {@link #LARGE_TASKS} tasks. */
+    public static final int DEFAULT_RESTARTS = 20;
+    /**
+     * Tasks beyond which {@link #AUTO} only cuts and improves the tour's own order: on Aurich (1,966 streets)
+     * the memetic search took 47-73 s and shortened the trips by 0.26 %; a town of that size is planned in
+     * seconds without it (docs/benchmarks.md). Every gdb, val and egl instance is far below.
+     */
+    public static final int LARGE_TASKS = 500;
 
     /** Children the memetic search breeds per unit of {@link Settings#restarts()}. */
     static final int CHILDREN_PER_RESTART = 25;
@@ -64,6 +78,9 @@ public final class TripPlanner {
     private final StreetNetwork network;
     private final int depot;
     private final Settings settings;
+    /** The distance table over the ends of {@link #tableOf}'s services, or null where it would not fit. */
+    private NodeDistances table;
+    private Tour tableOf;
 
     public TripPlanner(StreetNetwork network, int depot, Settings settings) {
         this.network = network;
@@ -76,23 +93,47 @@ public final class TripPlanner {
      * @param demandPerEdge capacity each edge's service uses, or null
      */
     public Result plan(Tour tour, double[] demandPerEdge) {
+        return plan(tour, demandPerEdge, step -> true);
+    }
+
+    /**
+     * Trips over some of the tour's services only (a vehicle's area): the tour's order of those services is
+     * the first giant tour.
+     *
+     * @param steps the tour's service steps to cut into trips, by step index
+     */
+    public Result plan(Tour tour, double[] demandPerEdge, IntPredicate steps) {
+        return plan(tour, demandPerEdge, steps, settings.restarts());
+    }
+
+    /**
+     * As {@link #plan(Tour, double[], IntPredicate)} at another search effort. Calls on the same tour share
+     * one distance table over all its services' ends, so planning its parts again (a fleet's balancing
+     * rounds) costs no further shortest-path searches.
+     */
+    public Result plan(Tour tour, double[] demandPerEdge, IntPredicate steps, int effort) {
         if (tour.start() != depot) {
             throw new IllegalArgumentException("the tour must start at the depot");
         }
-        Tasks tasks = Tasks.of(network, tour, demandPerEdge);
+        Tasks tasks = Tasks.of(network, tour, demandPerEdge, steps);
         if (tasks.size() == 0) {
-            return new Result(List.of(), false, 0);
+            return new Result(List.of(), false, 0, false);
         }
         int[] order = new int[tasks.size()];
         for (int i = 0; i < order.length; i++) {
             order[i] = i;
         }
-        int[] ends = withDepot(tasks.endpoints());
-        boolean improve = NodeDistances.fits(ends.length);
-        Distances distances = improve ? NodeDistances.among(network, ends) : new LazyDistances(network, depot);
+        if (tableOf != tour) {
+            int[] ends = withDepot(Tasks.of(network, tour, demandPerEdge).endpoints());
+            table = NodeDistances.fits(ends.length) ? NodeDistances.among(network, ends) : null;
+            tableOf = tour;
+        }
+        boolean improve = table != null;
+        Distances distances = improve ? table : new LazyDistances(network, depot);
         int[][] neighbours = improve ? TripLocalSearch.neighbours(tasks, distances) : null;
         List<int[]> best = solve(tasks, distances, neighbours, order, improve);
-        if (improve && settings.restarts() > 0) {
+        int restarts = effort == AUTO ? (tasks.size() <= LARGE_TASKS ? DEFAULT_RESTARTS : 0) : effort;
+        if (improve && restarts > 0) {
             TripLocalSearch measure = new TripLocalSearch(tasks, distances, depot, settings.limit(), neighbours);
             Random random = new Random(settings.seed());
             int[] drawn = {0};
@@ -100,9 +141,9 @@ public final class TripPlanner {
                     : shuffled(tasks.size(), random);
             best = new MemeticSearch((giant, improveIt) -> solve(tasks, distances, neighbours, giant, improveIt),
                     trips -> score(tasks, distances, trips, measure), random)
-                    .run(best, orders, settings.restarts() * CHILDREN_PER_RESTART);
+                    .run(best, orders, restarts * CHILDREN_PER_RESTART);
         }
-        return new Result(trips(tasks, best), improve, tasks.size());
+        return new Result(trips(tasks, best), improve, tasks.size(), improve && restarts > 0);
     }
 
     /** Total cost, or for k vehicles the longest trip's measure first (scaled to dominate), then total cost. */

@@ -68,6 +68,35 @@ class FieldOutputOptionsTest {
         }
     }
 
+    /**
+     * Two vehicles with 5 km trips and a quarter-hour shift on central Vienna (OpenStreetMap, one-way streets;
+     * every trip checked by TourValidator or the run fails): the JSON groups the trips by vehicle, the hours
+     * over the shift are each vehicle's hours beyond it, and the text says the fleet falls short and by how much.
+     */
+    @Test
+    void aFleetOfTwoGroupsItsTripsByVehicleAndSaysWhenTheShiftIsTooShort() throws Exception {
+        String[] base = {"plan", "fixtures/benchmarks/mixed-osm/vienna-a.geojson", "--leave-out-cut-off",
+            "--depot-part-only", "--vehicles", "2", "--max-trip-km", "5", "--shift-hours", "0.25", "--trip-restarts", "1"};
+        JsonNode fleet = runJson(base, "--json").at("/field");
+        assertEquals(2, fleet.at("/vehicles").size(), fleet.toString());
+        double over = 0;
+        int trips = 0;
+        for (JsonNode vehicle : fleet.at("/vehicles")) {
+            over += Math.max(0, vehicle.get("hours").asDouble() - 0.25);
+            trips += vehicle.get("trips").asInt();
+        }
+        assertEquals(trips, fleet.at("/trips").size());
+        assertEquals(over, fleet.at("/hours_over_shift").asDouble(), 0.002);
+        assertTrue(over > 0, "central Vienna takes more than two quarter-hour shifts");
+        for (JsonNode trip : fleet.at("/trips")) {
+            assertTrue(trip.get("length_m").asDouble() <= 5000 || trip.get("over_limit").asBoolean());
+        }
+        StringWriter out = new StringWriter();
+        assertEquals(ExitCode.OK, Main.run(base, new PrintWriter(out), new PrintWriter(new StringWriter())));
+        assertTrue(out.toString().contains("cannot cover the network within a 0.25 h shift"), out.toString());
+        assertTrue(out.toString().contains("another vehicle's streets within 200 m"), out.toString());
+    }
+
     private static JsonNode runJson(String[] base, String... more) throws Exception {
         String[] args = java.util.stream.Stream.concat(java.util.Arrays.stream(base), java.util.Arrays.stream(more))
                 .toArray(String[]::new);
