@@ -4,6 +4,10 @@ its own line (about 2 N^2 edges), with seeded defects sprinkled in: one-way bloc
 short, duplicated sides and crossing footbridges. Set in the open Atlantic; matches no real place.
 
     python3 docs/bench/make_grid.py 224 /tmp/grid-100k.geojson
+    python3 docs/bench/make_grid.py 224 /tmp/grid-100k-mixed.geojson 0.2   # a fifth of the sides one-way
+
+The optional third argument is the share of block sides made one-way (default 0.01); their directions are
+drawn from a second seeded generator (half along the side, half against); without it the layer is as before.
 """
 import json
 import math
@@ -12,6 +16,8 @@ import sys
 
 n, target = int(sys.argv[1]), sys.argv[2]
 rng = random.Random(5)
+one_way_share = float(sys.argv[3]) if len(sys.argv) > 3 else 0.01
+directions = random.Random(7) if len(sys.argv) > 3 else None
 LON0, LAT0 = -29.0, 43.0
 M_LAT = 111_132.0
 M_LON = M_LAT * math.cos(math.radians(LAT0))
@@ -40,7 +46,8 @@ for j in range(n):
                 b = (b[0] - 1.5 * dx, b[1] - 1.5 * dy)
             if r > 0.998:          # a side drawn twice
                 add([a, b])
-            add([a, b], **({"oneway": "yes"} if rng.random() < 0.01 else {}))
+            one_way = rng.random() < one_way_share
+            add([a, b], **({"oneway": directions.choice(("yes", "-1")) if directions else "yes"} if one_way else {}))
 for _ in range(n * n // 500):  # footbridges across a block side, no shared vertex
     i, j = rng.randrange(n - 1), rng.randrange(1, n - 1)
     add([(80 * i + 40, 80 * j - 20), (80 * i + 40, 80 * j + 20)], bridge="yes")

@@ -3,6 +3,7 @@ package org.streetcomb.solve;
 import com.google.ortools.Loader;
 import com.google.ortools.linearsolver.MPConstraint;
 import com.google.ortools.linearsolver.MPSolver;
+import com.google.ortools.linearsolver.MPSolverParameters;
 import com.google.ortools.linearsolver.MPVariable;
 import java.util.ArrayList;
 import java.util.Arrays;
@@ -27,7 +28,7 @@ import org.streetcomb.read.Travel;
  * connected parts of the network once the streets whose LP traversals exceed their service passes by more
  * than a threshold are kept; the streets across such a set have (nearly) no spare traversals, so an odd
  * set gives a cut violated by nearly one. The LP is re-solved after each round of cuts (GLOP, the simplex
- * code of OR-Tools, warm-started by keeping its basis between rounds) until no cut is found or the round or
+ * code of OR-Tools: dual simplex, warm-started from the last basis after rows are added) until no cut is found or the round or
  * time budget ends; every round's optimum is a valid bound, and the bound only grows.
  *
  * <p>Why a library: a dual simplex with warm starts after added rows is a large, well-kept piece of code
@@ -125,6 +126,13 @@ public final class MixedLpBound {
                     selfLoops += passes[e] * network.length(e);
                 }
             }
+            // dual simplex without presolve: after added rows it re-starts from the last basis (measured on
+            // Andorra, 2,813 streets: 0.012 s a round against 0.13 s with the defaults)
+            MPSolverParameters params = new MPSolverParameters();
+            params.setIntegerParam(MPSolverParameters.IntegerParam.PRESOLVE,
+                    MPSolverParameters.PresolveValues.PRESOLVE_OFF.swigValue());
+            params.setIntegerParam(MPSolverParameters.IntegerParam.LP_ALGORITHM,
+                    MPSolverParameters.LpAlgorithmValues.DUAL.swigValue());
             double[] a = new double[m];
             double[] b = new double[m];
             double bound = Double.NEGATIVE_INFINITY;
@@ -138,7 +146,7 @@ public final class MixedLpBound {
                     break;
                 }
                 solver.setTimeLimit(Math.max(1000, (long) (left * 1000)));
-                MPSolver.ResultStatus status = solver.solve();
+                MPSolver.ResultStatus status = solver.solve(params);
                 if (status != MPSolver.ResultStatus.OPTIMAL) {
                     break;
                 }

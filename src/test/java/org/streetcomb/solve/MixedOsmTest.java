@@ -32,8 +32,11 @@ class MixedOsmTest {
         List<String> failures = new ArrayList<>();
         double sum = 0;
         int count = 0;
-        for (String row : Files.readAllLines(Path.of("fixtures/benchmarks/mixed-osm/values.csv")).subList(1, 9)) {
+        for (String row : Files.readAllLines(Path.of("fixtures/benchmarks/mixed-osm/values.csv")).subList(1, 10)) {
             String[] f = row.split(",");
+            if (f[0].equals("baltimore")) {
+                continue; // 4,031 streets, not proved optimal; in docs/quality.md, too slow for the suite
+            }
             String path = MixedOsmReference.INSTANCES.stream().filter(i -> i[1].equals(f[0])).findFirst().orElseThrow()[0];
             double optimum = Double.parseDouble(f[3]);
             assertTrue(f[5].equals("optimal"), f[0] + " reference not proved");
@@ -61,6 +64,7 @@ class MixedOsmTest {
             sum += ours / optimum - 1;
             count++;
         }
+        assertTrue(count == 8, "instances read: " + count);
         assertTrue(sum / count <= MEAN_GAP, "mean gap " + sum / count);
         assertTrue(failures.isEmpty(), failures.toString());
     }
