@@ -17,12 +17,30 @@ import org.streetcomb.network.StreetNetwork;
  * greedily, so the result is a heuristic even where each area's plan is exact; the lower bound is the
  * mixed relaxation of the whole problem ({@link MixedPostman#lowerBound}).
  */
-final class AreaChainPostman {
+final class AreaChainPostman implements PostmanSolver {
 
-    private AreaChainPostman() {
+
+    @Override
+    public String method() {
+        return "an open route planned area by area through the parts one-way streets join in one direction only, each area by its own variant";
     }
 
-    static Augmentation solve(PostmanProblem problem, OpenRouteOrder.Chain chain) {
+    @Override
+    public boolean exact() {
+        return false;
+    }
+
+    @Override
+    public String complexity() {
+        return "the chosen variant per area, plus one Dijkstra search per area joined";
+    }
+
+    @Override
+    public Augmentation solve(PostmanProblem problem) {
+        return solve(problem, OpenRouteOrder.chain(problem, "the open route"));
+    }
+
+    private Augmentation solve(PostmanProblem problem, OpenRouteOrder.Chain chain) {
         StreetNetwork network = problem.network();
         ServiceDemand demand = problem.demand();
         int m = network.edgeCount();

@@ -15,12 +15,26 @@ import org.streetcomb.read.Travel;
  * <p>Also the balancing step of the directed rural postman and the re-optimisation of mixed solutions
  * once every street has a direction. The problem must have passed {@link ReachabilityCheck}.
  */
-public final class DirectedPostman {
+public final class DirectedPostman implements PostmanSolver {
 
-    private DirectedPostman() {
+
+    @Override
+    public String method() {
+        return "Edmonds & Johnson 1973; Beltrami & Bodin 1974: minimum-cost flow balancing every node";
     }
 
-    public static Augmentation solve(PostmanProblem problem) {
+    @Override
+    public boolean exact() {
+        return true;
+    }
+
+    @Override
+    public String complexity() {
+        return "one minimum-cost flow on the street network: O(m log U (m + n log n)) by capacity scaling";
+    }
+
+    @Override
+    public Augmentation solve(PostmanProblem problem) {
         StreetNetwork network = problem.network();
         ServiceDemand demand = problem.demand();
         if (!demand.directed()) {

@@ -16,15 +16,29 @@ import org.streetcomb.network.StreetNetwork;
  * <p>Lower bound: the service length plus the minimum-cost flow that balances the service arcs alone
  * (connection relaxed).
  */
-public final class DirectedRuralPostman {
+public final class DirectedRuralPostman implements PostmanSolver {
 
     /** Connecting paths tried for removal, each one flow solve. */
     static final int DROP_ATTEMPTS = 60;
 
-    private DirectedRuralPostman() {
+
+    @Override
+    public String method() {
+        return "Christofides, Campos, Corberan & Mota 1986: spanning tree over the groups of arcs to service, then minimum-cost flow";
     }
 
-    public static Augmentation solve(PostmanProblem problem) {
+    @Override
+    public boolean exact() {
+        return false;
+    }
+
+    @Override
+    public String complexity() {
+        return "O(g m log n) for g groups, plus one minimum-cost flow per connecting path tried for removal (at most DROP_ATTEMPTS)";
+    }
+
+    @Override
+    public Augmentation solve(PostmanProblem problem) {
         StreetNetwork network = problem.network();
         ServiceDemand demand = problem.demand();
         int m = network.edgeCount();

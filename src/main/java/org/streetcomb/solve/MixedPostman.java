@@ -31,7 +31,7 @@ import org.streetcomb.read.Travel;
  * Lower bound: the larger of the undirected relaxation (service plus a minimum-cost pairing of odd nodes,
  * one-way restrictions ignored) and the INOUTDEGREE flow (service plus the flow's cost, parity relaxed).
  */
-public final class MixedPostman {
+public final class MixedPostman implements PostmanSolver {
 
     /** Single-street direction flips tried in the local search, each one flow solve. */
     static final int FLIPS = 300;
@@ -58,10 +58,24 @@ public final class MixedPostman {
     /** A tour within this share of the bound counts as optimal: the LP solver's relative tolerance, twice. */
     static final double CERTIFIED = 2e-6;
 
-    private MixedPostman() {
+
+    @Override
+    public String method() {
+        return "Frederickson 1979 MIXED2 with exact re-balancing and direction flips; lower bound from the LP relaxation with odd cuts (Nobert & Picard 1996)";
     }
 
-    public static Augmentation solve(PostmanProblem problem) {
+    @Override
+    public boolean exact() {
+        return false;
+    }
+
+    @Override
+    public String complexity() {
+        return "a few minimum-cost flows and one Blossom V pairing, plus one flow per direction flip tried (at most FLIPS) and the LP rounds (at most LP_ROUNDS)";
+    }
+
+    @Override
+    public Augmentation solve(PostmanProblem problem) {
         StreetNetwork network = problem.network();
         ServiceDemand demand = problem.demand();
         int m = network.edgeCount();

@@ -15,20 +15,34 @@ import org.streetcomb.network.StreetNetwork;
  * <p>Exact when every edge of each planned part is to be serviced once and no street is one-way; the
  * rural variant ({@link UndirectedRuralPostman}) reuses the matching step.
  */
-public final class UndirectedPostman {
+public final class UndirectedPostman implements PostmanSolver {
 
     /** Initial candidate partners per odd node; pricing adds any the optimum needs. */
     static final int NEIGHBOURS = 8;
 
-    private UndirectedPostman() {
-    }
 
     /** Every edge of a network without one-way streets, closed tours. */
     public static Augmentation solve(StreetNetwork network) {
-        return solve(new PostmanProblem(network, ServiceDemand.everyEdge(network), new int[0], -1));
+        return new UndirectedPostman().solve(new PostmanProblem(network, ServiceDemand.everyEdge(network), new int[0], -1));
     }
 
-    public static Augmentation solve(PostmanProblem problem) {
+    @Override
+    public String method() {
+        return "Edmonds & Johnson 1973: minimum-cost pairing of odd nodes (Blossom V, Kolmogorov 2009) over shortest paths";
+    }
+
+    @Override
+    public boolean exact() {
+        return true;
+    }
+
+    @Override
+    public String complexity() {
+        return "O(k m log n) for k candidate partners per odd node by Dijkstra, plus Blossom V on the candidate graph, repeated while pricing finds a violated pair";
+    }
+
+    @Override
+    public Augmentation solve(PostmanProblem problem) {
         StreetNetwork network = problem.network();
         int[] either = problem.demand().either().clone();
         Matched matched = addMatching(problem, either);

@@ -17,15 +17,29 @@ import org.streetcomb.network.StreetNetwork;
  * streets to service (any tour adds deadhead that makes them even) and, for closed tours, the sum of each
  * group's distance to its nearest other group ({@link ComponentConnector#nearestGroupBound}).
  */
-public final class UndirectedRuralPostman {
+public final class UndirectedRuralPostman implements PostmanSolver {
 
     /** Drop attempts, each a connectivity check of O(E): bounds the improvement on large networks. */
     static final int DROP_ATTEMPTS = 2000;
 
-    private UndirectedRuralPostman() {
+
+    @Override
+    public String method() {
+        return "Frederickson 1979: spanning tree over the groups of streets to service, then minimum-cost pairing; Hertz, Laporte & Nanchen-Hugo 1999 shortening";
     }
 
-    public static Augmentation solve(PostmanProblem problem) {
+    @Override
+    public boolean exact() {
+        return false;
+    }
+
+    @Override
+    public String complexity() {
+        return "O(g m log n) for g groups of streets to service, plus the pairing of the undirected postman";
+    }
+
+    @Override
+    public Augmentation solve(PostmanProblem problem) {
         StreetNetwork network = problem.network();
         ServiceDemand demand = problem.demand();
         int m = network.edgeCount();

@@ -45,7 +45,7 @@ class ServiceOrderStretchTest {
             } catch (NoTourError e) {
                 continue;
             }
-            Augmentation constructed = MixedPostman.solve(problem);
+            Augmentation constructed = new MixedPostman().solve(problem);
             Augmentation stretched = ServiceOrderSearch.improve(problem, constructed, 4);
             TourPlanner.tours(problem, parts, stretched);
             double optimum = ExhaustiveWalk.shortest(network, required, start, start);

@@ -43,7 +43,7 @@ class UndirectedPostmanBenchmarkTest {
         StreetNetwork network = CarplibNetwork.of(instance);
         ServiceDemand demand = ServiceDemand.everyEdge(network);
         PostmanProblem problem = new PostmanProblem(network, demand, new int[] {instance.depot() - 1}, instance.depot() - 1);
-        Augmentation augmentation = UndirectedPostman.solve(problem);
+        Augmentation augmentation = new UndirectedPostman().solve(problem);
         List<Tour> tours = TourPlanner.tours(problem, Components.of(network), augmentation);
 
         assertEquals(1, tours.size(), "the benchmark graphs are connected");
