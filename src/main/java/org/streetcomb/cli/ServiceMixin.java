@@ -34,12 +34,22 @@ public final class ServiceMixin {
                     + "depot (typical at the edge of an extract); by default the plan is refused.")
     boolean leaveOutCutOff;
 
+    @Option(names = "--prove", paramLabel = "SECONDS",
+            description = "After planning, spend at most SECONDS seeking a proof that the tour is the shortest "
+                    + "(or a shorter one) with an exact integer program; the summary then says 'optimal, proved' or "
+                    + "gives the certified gap reached. Progress on stderr.")
+    double proveSeconds;
+
     ServiceOptions options(CommandLine commandLine) {
+        if (!(proveSeconds >= 0) || proveSeconds > 86_400) {
+            throw new CommandLine.ParameterException(commandLine, "--prove takes seconds from 0 to 86400, not "
+                    + proveSeconds);
+        }
         if (oneWayTwice && !bothKerbs) {
             throw new CommandLine.ParameterException(commandLine, "--one-way-twice needs --both-kerbs");
         }
         KerbMode kerbs = !bothKerbs ? KerbMode.ONE_PASS
                 : oneWayTwice ? KerbMode.BOTH_KERBS_ONE_WAY_TWICE : KerbMode.BOTH_KERBS;
-        return new ServiceOptions(kerbs, serviceIds, end, leaveOutCutOff);
+        return new ServiceOptions(kerbs, serviceIds, end, leaveOutCutOff, proveSeconds);
     }
 }

@@ -53,6 +53,14 @@ final class TerminalProgress implements StageClock.Listener {
         }
     }
 
+    @Override
+    public void note(String message) {
+        if (shown.getAndSet(false)) {
+            err.println();
+        }
+        err.println(message);
+    }
+
     /** On Linux, whether file descriptor 2 is a terminal; elsewhere, whether the JVM has a console. */
     private static boolean stderrIsTerminal() {
         try {

@@ -16,6 +16,7 @@ import org.streetcomb.read.LayerReaders;
 import org.streetcomb.read.RoadLayer;
 import org.streetcomb.solve.Augmentation;
 import org.streetcomb.solve.PostmanProblem;
+import org.streetcomb.solve.CirculationSearch;
 import org.streetcomb.solve.PostmanVariants;
 import org.streetcomb.solve.ReachabilityCheck;
 import org.streetcomb.tour.Tour;
@@ -65,7 +66,10 @@ public final class Planner {
         } catch (NoTourError cutOff) {
             throw OneWayTrapCheck.explain(cutOff, network, request.input());
         }
-        Augmentation augmentation = clock.time("solve", () -> PostmanVariants.solve(problem));
+        Augmentation heuristic = clock.time("solve", () -> PostmanVariants.solve(problem));
+        double prove = request.service().proveSeconds();
+        Augmentation augmentation = prove <= 0 ? heuristic
+                : clock.time("prove", () -> CirculationSearch.improve(problem, heuristic, prove, clock::note));
         List<Tour> tours = clock.time("order", () -> TourPlanner.tours(problem, components, augmentation));
         if (tours.get(0).steps() == 0) {
             warnings.add("the depot's tour is empty: nothing it can reach and leave again needs servicing; give a "

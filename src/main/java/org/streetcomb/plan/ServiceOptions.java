@@ -13,8 +13,15 @@ import org.streetcomb.solve.KerbMode;
  * @param end        where the depot's tour ends (an open route), or null to return to the depot
  * @param leaveOutCutOff leave out, with a warning, streets that one-way streets cut off from the tour's
  *                   start or end, instead of refusing to plan
+ * @param proveSeconds  when above zero, seek a proof of optimality (or a shorter tour) for at most this many
+ *                   seconds after the heuristic ({@code CirculationSearch})
  */
-public record ServiceOptions(KerbMode kerbs, Path serviceIds, LonLat end, boolean leaveOutCutOff) {
+public record ServiceOptions(KerbMode kerbs, Path serviceIds, LonLat end, boolean leaveOutCutOff,
+                             double proveSeconds) {
 
     public static final ServiceOptions DEFAULTS = new ServiceOptions(KerbMode.ONE_PASS, null, null, false);
+
+    public ServiceOptions(KerbMode kerbs, Path serviceIds, LonLat end, boolean leaveOutCutOff) {
+        this(kerbs, serviceIds, end, leaveOutCutOff, 0);
+    }
 }

@@ -19,6 +19,10 @@ public final class StageClock {
         void started(String stage);
 
         void finished(Stage stage);
+
+        /** A progress line from inside a long stage (the proof search, say). */
+        default void note(String message) {
+        }
     }
 
     private final List<Stage> stages = new ArrayList<>();
@@ -43,6 +47,11 @@ public final class StageClock {
             work.run();
             return null;
         });
+    }
+
+    /** Passes a progress line to the listener. */
+    public void note(String message) {
+        listener.note(message);
     }
 
     public List<Stage> stages() {

@@ -292,7 +292,8 @@ public final class MixedLpBound {
         return cuts;
     }
 
-    private static int find(int[] parent, int v) {
+    /** Union-find with path halving (both this class and CirculationSearch group nodes with it). */
+    static int find(int[] parent, int v) {
         while (parent[v] != v) {
             parent[v] = parent[parent[v]];
             v = parent[v];
@@ -300,7 +301,7 @@ public final class MixedLpBound {
         return v;
     }
 
-    private static void union(int[] parent, int u, int v) {
+    static void union(int[] parent, int u, int v) {
         int ru = find(parent, u);
         int rv = find(parent, v);
         if (ru != rv) {
