@@ -146,7 +146,7 @@ public final class FieldOutputOptions {
                 ordered.add(new Trip(tours.get(t), cut.get(t).length(), cut.get(t).service(), cut.get(t).demand(),
                         cut.get(t).overLimit()));
             }
-            tripOptions.report(trips, ordered, json, text);
+            tripOptions.report(trips, ordered, plan.network(), plan.depot(), json, text);
         }
         ObjectNode turns = json.putObject("turns");
         turns.put("traffic_side", side.name().toLowerCase(Locale.ROOT));

@@ -16,6 +16,10 @@ import org.streetcomb.fleet.Fleet;
 import org.streetcomb.fleet.FleetPlanner;
 import org.streetcomb.fleet.FleetSettings;
 import org.streetcomb.fleet.ServiceOverlap;
+import org.streetcomb.fleet.StreetDemand;
+import org.streetcomb.network.LonLat;
+import org.streetcomb.network.NearestNode;
+import org.streetcomb.network.StreetNetwork;
 import org.streetcomb.fleet.VehicleDay;
 import picocli.CommandLine;
 import picocli.CommandLine.Option;
@@ -42,6 +46,29 @@ public final class TripOptions {
                     + "much the fleet falls short when they do not fit.")
     Double shiftHours;
 
+    @Option(names = "--capacity", paramLabel = "LOAD",
+            description = "What one vehicle carries, in the unit of --demand-field or --demand-per-km (tonnes of "
+                    + "salt, bins); a trip ends when its load is used up.")
+    Double capacity;
+
+    @Option(names = "--demand-field", paramLabel = "FIELD",
+            description = "The field holding what servicing each street uses of the load (shared along the street "
+                    + "by length).")
+    String demandField;
+
+    @Option(names = "--demand-per-km", paramLabel = "RATE",
+            description = "What servicing uses of the load per kilometre and lane (e.g. tonnes of salt per km).")
+    Double demandPerKm;
+
+    @Option(names = "--lanes-field", paramLabel = "FIELD",
+            description = "The field holding each street's lanes, for --demand-per-km (empty values count as one).")
+    String lanesField;
+
+    @Option(names = "--reload-at", paramLabel = "LON,LAT", converter = LonLatConverter.class,
+            description = "A place besides the depot where vehicles may reload between trips (a salt barn, a tip), "
+                    + "as longitude,latitude; repeat for several. Each trip ends where the way on is shortest.")
+    List<LonLat> reloadAt = new ArrayList<>();
+
     @Option(names = "--service-speed", paramLabel = "KMH", defaultValue = "10",
             description = "Average speed while servicing, for trip durations (default: ${DEFAULT-VALUE} km/h).")
     double serviceSpeed;
@@ -56,8 +83,12 @@ public final class TripOptions {
                     + " for a vehicle's " + TripPlanner.LARGE_TASKS + " streets or fewer, 0 beyond).")
     Integer restarts;
 
+    /** How far a reload point may lie from the nearest street node (as the depot's default reach). */
+    static final double RELOAD_REACH_METRES = 500;
+
     boolean requested() {
-        return maxKm != null || maxHours != null || vehicles != null || shiftHours != null;
+        return maxKm != null || maxHours != null || vehicles != null || shiftHours != null || capacity != null
+                || !reloadAt.isEmpty();
     }
 
     void check(CommandLine commandLine) {
@@ -70,6 +101,20 @@ public final class TripOptions {
         }
         if (vehicles != null && (vehicles < 1 || vehicles > 1000)) {
             throw new CommandLine.ParameterException(commandLine, "--vehicles must be 1 to 1000");
+        }
+        if ((capacity == null) != (demandField == null && demandPerKm == null)) {
+            throw new CommandLine.ParameterException(commandLine, capacity == null
+                    ? "--demand-field and --demand-per-km need --capacity" : "--capacity needs --demand-field or --demand-per-km");
+        }
+        if (demandField != null && demandPerKm != null) {
+            throw new CommandLine.ParameterException(commandLine, "give --demand-field or --demand-per-km, not both");
+        }
+        if (lanesField != null && demandPerKm == null) {
+            throw new CommandLine.ParameterException(commandLine, "--lanes-field goes with --demand-per-km");
+        }
+        if ((capacity != null && !(capacity > 0 && capacity < Double.POSITIVE_INFINITY))
+                || (demandPerKm != null && !(demandPerKm >= 0 && demandPerKm < Double.POSITIVE_INFINITY))) {
+            throw new CommandLine.ParameterException(commandLine, "--capacity must be above 0 and --demand-per-km 0 or more");
         }
         if (!(serviceSpeed > 0) || !(travelSpeed > 0)) {
             throw new CommandLine.ParameterException(commandLine, "speeds must be above 0 km/h");
@@ -88,11 +133,28 @@ public final class TripOptions {
         }
         TripLimit limit = maxKm != null ? TripLimit.length(maxKm * 1000)
                 : maxHours != null ? TripLimit.hours(maxHours, serviceSpeed, travelSpeed)
+                : capacity != null ? TripLimit.capacity(capacity)
                 : TripLimit.length(Double.POSITIVE_INFINITY);
+        if (capacity != null && (maxKm != null || maxHours != null)) {
+            limit = limit.withCapacity(capacity);
+        }
+        double[] demand = capacity == null ? null : StreetDemand.of(plan.network(), demandField,
+                demandPerKm == null ? 0 : demandPerKm, lanesField, plan.request().input());
+        List<Integer> reloads = new ArrayList<>();
+        int part = plan.components().of(plan.depot());
+        for (LonLat at : reloadAt) {
+            NearestNode.Hit hit = NearestNode.of(plan.network(), at.lon(), at.lat(),
+                    node -> plan.components().of(node) == part);
+            if (hit.node() < 0 || hit.distance() > RELOAD_REACH_METRES) {
+                throw new InputError(String.format(Locale.ROOT, "--reload-at %s,%s: no street node of the depot's part "
+                        + "within %.0f m; give a place on the network", at.lon(), at.lat(), RELOAD_REACH_METRES));
+            }
+            reloads.add(hit.node());
+        }
         FleetSettings settings = new FleetSettings(vehicles == null ? 1 : vehicles, limit,
                 shiftHours == null ? Double.POSITIVE_INFINITY : shiftHours, serviceSpeed, travelSpeed,
-                restarts == null ? TripPlanner.AUTO : restarts, 1);
-        return new FleetPlanner(plan.network(), plan.depot(), settings).plan(plan.tours().get(0), null);
+                restarts == null ? TripPlanner.AUTO : restarts, 1, reloads);
+        return new FleetPlanner(plan.network(), plan.depot(), settings).plan(plan.tours().get(0), demand);
     }
 
 
@@ -108,7 +170,7 @@ public final class TripOptions {
      * Summary lines and JSON for the fleet; {@code driven} are the trips as driven (reordered for turns), vehicle
      * by vehicle in the fleet's order.
      */
-    void report(Fleet fleet, List<Trip> driven, ObjectNode json, List<String[]> text) {
+    void report(Fleet fleet, List<Trip> driven, StreetNetwork network, int depot, ObjectNode json, List<String[]> text) {
         ArrayNode list = json.putArray("trips");
         ArrayNode days = json.putArray("vehicles");
         List<String[]> lines = new ArrayList<>();
@@ -139,8 +201,16 @@ public final class TripOptions {
                 node.put("deadhead_share", scaled(trip.deadheadShare(), 6));
                 node.put("hours", scaled(hours, 3));
                 node.put("over_limit", trip.overLimit());
+                if (capacity != null) {
+                    node.put("load", scaled(trip.demand(), 3));
+                }
+                int end = trip.tour().end(network);
+                int reload = fleet.settings().reloads().indexOf(end);
+                node.put("ends_at", end == depot ? "depot" : reload >= 0 ? "reload " + (reload + 1) : "node " + end);
                 lines.add(new String[] {several ? "    trip " + (i + 1) : "  trip " + (t + 1), String.format(Locale.ROOT,
-                        "%.3f km, %.2f h, deadhead %.1f %%%s", trip.length() / 1000, hours, 100 * trip.deadheadShare(),
+                        "%.3f km, %.2f h, deadhead %.1f %%%s%s%s", trip.length() / 1000, hours, 100 * trip.deadheadShare(),
+                        capacity != null ? String.format(Locale.ROOT, ", load %.2f of %.2f", trip.demand(), capacity) : "",
+                        end != depot && reload >= 0 ? ", then reloads at the place of --reload-at no. " + (reload + 1) : "",
                         trip.overLimit() ? " [over the limit]" : "")});
                 if (trip.overLimit() && services(trip) == 1) {
                     lines.add(new String[] {"Warning", (several ? "vehicle " + day.vehicle() + " trip " + (i + 1) : "trip " + (t + 1))

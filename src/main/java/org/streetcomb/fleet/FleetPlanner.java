@@ -30,13 +30,17 @@ public final class FleetPlanner {
     private final int depot;
     private final FleetSettings settings;
     private final TripPlanner trips;
+    /** Trips that may start and end at reload points, or null without any. */
+    private final TripPlanner viaReloads;
 
     public FleetPlanner(StreetNetwork network, int depot, FleetSettings settings) {
         this.network = network;
         this.depot = depot;
         this.settings = settings;
-        this.trips = new TripPlanner(network, depot, new TripPlanner.Settings(settings.tripLimit(), 0,
-                settings.restarts(), settings.seed()));
+        TripPlanner.Settings cut = new TripPlanner.Settings(settings.tripLimit(), 0, settings.restarts(), settings.seed());
+        this.trips = new TripPlanner(network, depot, cut);
+        this.viaReloads = settings.reloads().isEmpty() ? null : new TripPlanner(network, depot, cut,
+                settings.reloads().stream().mapToInt(Integer::intValue).toArray());
     }
 
     /**
@@ -81,7 +85,71 @@ public final class FleetPlanner {
         }
         boolean[] improved = {true};
         List<VehicleDay> days = days(tour, demandPerEdge, steps, sector, settings.restarts(), improved);
+        if (viaReloads != null && days.stream().anyMatch(day -> day.trips().size() > 1)) {
+            List<VehicleDay> reloading = days(tour, demandPerEdge, steps, sector, settings.restarts(), improved, viaReloads)
+                    .stream().map(this::chained).toList();
+            List<VehicleDay> better = new ArrayList<>();
+            for (int v = 0; v < k; v++) {
+                better.add(reloading.get(v).hours() < days.get(v).hours() - 1e-9 ? reloading.get(v) : days.get(v));
+            }
+            days = better;
+        }
         return new Fleet(days, settings, k > 1 ? ServiceOverlap.share(network, days) : 0, improved[0]);
+    }
+
+    /**
+     * A vehicle's trips driven one after the other: the first leaves the depot, each next one leaves from the
+     * home (depot or reload point) where the one before ended, and the last returns to the depot; a trip whose
+     * start or end moves is driven again by shortest paths between its services (and flagged if it no longer
+     * fits the limit).
+     */
+    private VehicleDay chained(VehicleDay day) {
+        List<Trip> chained = new ArrayList<>();
+        int at = depot;
+        double hours = 0;
+        List<Trip> ordered = inChainOrder(day.trips());
+        for (int k = 0; k < ordered.size(); k++) {
+            Trip trip = ordered.get(k);
+            int to = k == ordered.size() - 1 ? depot : trip.tour().end(network);
+            if (trip.tour().start() != at || trip.tour().end(network) != to) {
+                trip = viaReloads.redriven(trip, at, to);
+            }
+            chained.add(trip);
+            hours += settings.hours(trip);
+            at = to;
+        }
+        return new VehicleDay(day.vehicle(), chained, hours);
+    }
+
+    /**
+     * The trips in an order that lets each leave from where the one before ended: from the depot, always the
+     * next trip that starts at the current home (ties by the order cut), else the first; trips ending at the
+     * depot are kept for last where there is a choice. O(trips^2).
+     */
+    private List<Trip> inChainOrder(List<Trip> trips) {
+        List<Trip> left = new ArrayList<>(trips);
+        List<Trip> order = new ArrayList<>();
+        int at = depot;
+        while (!left.isEmpty()) {
+            Trip pick = null;
+            for (Trip t : left) {
+                boolean startsHere = t.tour().start() == at;
+                boolean endsAway = t.tour().end(network) != depot || left.size() == 1;
+                if (startsHere && (endsAway || pick == null)) {
+                    pick = t;
+                    if (endsAway) {
+                        break;
+                    }
+                }
+            }
+            if (pick == null) {
+                pick = left.get(0);
+            }
+            left.remove(pick);
+            order.add(pick);
+            at = pick.tour().end(network);
+        }
+        return order;
     }
 
     private List<VehicleDay> days(Tour tour, double[] demand, List<Integer> steps, int[] sector, int restarts) {
@@ -90,6 +158,11 @@ public final class FleetPlanner {
 
     private List<VehicleDay> days(Tour tour, double[] demand, List<Integer> steps, int[] sector, int restarts,
                                   boolean[] improved) {
+        return days(tour, demand, steps, sector, restarts, improved, trips);
+    }
+
+    private List<VehicleDay> days(Tour tour, double[] demand, List<Integer> steps, int[] sector, int restarts,
+                                  boolean[] improved, TripPlanner trips) {
         int[] sectorOfStep = new int[tour.steps()];
         Arrays.fill(sectorOfStep, -1);
         for (int s = 0; s < steps.size(); s++) {

@@ -1,5 +1,6 @@
 package org.streetcomb.fleet;
 
+import java.util.List;
 import org.streetcomb.trip.Trip;
 import org.streetcomb.trip.TripLimit;
 
@@ -13,14 +14,22 @@ import org.streetcomb.trip.TripLimit;
  * @param travelKmh  average speed on deadhead
  * @param restarts   search effort of the trip cutting ({@link org.streetcomb.trip.TripPlanner.Settings#restarts()})
  * @param seed       seed of the randomised search
+ * @param reloads    network nodes besides the depot where a vehicle may reload between trips (a salt barn, a tip)
  */
 public record FleetSettings(int vehicles, TripLimit tripLimit, double shiftHours, double serviceKmh, double travelKmh,
-                            int restarts, long seed) {
+                            int restarts, long seed, List<Integer> reloads) {
 
     public FleetSettings {
         if (vehicles < 1) {
             throw new IllegalArgumentException("at least one vehicle");
         }
+        reloads = List.copyOf(reloads);
+    }
+
+    /** Settings with the depot as the only reload point. */
+    public FleetSettings(int vehicles, TripLimit tripLimit, double shiftHours, double serviceKmh, double travelKmh,
+                         int restarts, long seed) {
+        this(vehicles, tripLimit, shiftHours, serviceKmh, travelKmh, restarts, seed, List.of());
     }
 
     /** Hours a trip takes at the service and travel speeds. */

@@ -362,7 +362,7 @@ final class TripLocalSearch {
         if (penalty == Double.POSITIVE_INFINITY) {
             return total[0];
         }
-        return total[0] + penalty * Math.max(0, limit.use(total[1], total[0] - total[1], total[2]) - limit.max());
+        return total[0] + penalty * limit.excess(total[1], total[0] - total[1], total[2]);
     }
 
     private boolean fits(double[] total) {

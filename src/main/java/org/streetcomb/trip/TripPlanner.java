@@ -1,14 +1,17 @@
 package org.streetcomb.trip;
 
 import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.BitSet;
 import java.util.List;
 import java.util.Random;
 import java.util.function.IntPredicate;
 import java.util.function.Supplier;
+import java.util.stream.IntStream;
 import org.streetcomb.network.DijkstraSearch;
 import org.streetcomb.network.Heading;
 import org.streetcomb.network.StreetNetwork;
+import org.streetcomb.solve.ServiceDemand;
 import org.streetcomb.tour.EarliestService;
 import org.streetcomb.tour.Tour;
 import org.streetcomb.tour.TourValidator;
@@ -78,14 +81,27 @@ public final class TripPlanner {
     private final StreetNetwork network;
     private final int depot;
     private final Settings settings;
+    /** The depot, then the reload points. */
+    private final int[] homes;
     /** The distance table over the ends of {@link #tableOf}'s services, or null where it would not fit. */
     private NodeDistances table;
     private Tour tableOf;
 
     public TripPlanner(StreetNetwork network, int depot, Settings settings) {
+        this(network, depot, settings, new int[0]);
+    }
+
+    /**
+     * @param reloads nodes besides the depot where a trip may start and end (reload points); each trip then
+     *                leaves from the home nearest its first service and ends at the home nearest its last
+     *                ({@link NearestHome})
+     */
+    public TripPlanner(StreetNetwork network, int depot, Settings settings, int[] reloads) {
         this.network = network;
         this.depot = depot;
         this.settings = settings;
+        this.homes = IntStream.concat(IntStream.of(depot),
+                Arrays.stream(reloads).filter(r -> r != depot)).distinct().toArray();
     }
 
     /**
@@ -124,15 +140,21 @@ public final class TripPlanner {
             order[i] = i;
         }
         if (tableOf != tour) {
-            int[] ends = withDepot(Tasks.of(network, tour, demandPerEdge).endpoints());
+            int[] ends = IntStream.concat(Arrays.stream(Tasks.of(network, tour, demandPerEdge)
+                    .endpoints()), Arrays.stream(homes)).distinct().sorted().toArray();
             table = NodeDistances.fits(ends.length) ? NodeDistances.among(network, ends) : null;
             tableOf = tour;
         }
         boolean improve = table != null;
-        Distances distances = improve ? table : new LazyDistances(network, depot);
+        Distances direct = improve ? table : new LazyDistances(network, depot);
+        Distances distances = homes.length > 1 ? new NearestHome(direct, depot, homes) : direct;
         int[][] neighbours = improve ? TripLocalSearch.neighbours(tasks, distances) : null;
         List<int[]> best = solve(tasks, distances, neighbours, order, improve);
         int restarts = effort == AUTO ? (tasks.size() <= LARGE_TASKS ? DEFAULT_RESTARTS : 0) : effort;
+        // one trip holds everything: the giant tours' search has nothing to cut and the local search has ordered it
+        if (best.size() == 1) {
+            restarts = 0;
+        }
         if (improve && restarts > 0) {
             TripLocalSearch measure = new TripLocalSearch(tasks, distances, depot, settings.limit(), neighbours);
             Random random = new Random(settings.seed());
@@ -143,7 +165,7 @@ public final class TripPlanner {
                     trips -> score(tasks, distances, trips, measure), random)
                     .run(best, orders, restarts * CHILDREN_PER_RESTART);
         }
-        return new Result(trips(tasks, best), improve, tasks.size(), improve && restarts > 0);
+        return new Result(trips(tasks, best, distances), improve, tasks.size(), improve && restarts > 0);
     }
 
     /** Total cost, or for k vehicles the longest trip's measure first (scaled to dominate), then total cost. */
@@ -173,7 +195,7 @@ public final class TripPlanner {
         TripLimit bound = settings.limit();
         if (settings.vehicles() > 0) {
             bound = new TripLimit(bound.perServiceMetre(), bound.perDeadheadMetre(), bound.perDemand(),
-                    longest(tasks, distances, trips));
+                    longest(tasks, distances, trips), bound.capacity());
         }
         TripLocalSearch search = new TripLocalSearch(tasks, distances, depot, bound, neighbours);
         if (settings.vehicles() == 0) {
@@ -264,19 +286,13 @@ public final class TripPlanner {
         return order;
     }
 
-    private int[] withDepot(int[] ends) {
-        int[] all = java.util.Arrays.copyOf(ends, ends.length + 1);
-        all[ends.length] = depot;
-        return java.util.Arrays.stream(all).distinct().sorted().toArray();
-    }
-
     /**
      * The trips as tours: shortest paths between the services, every trip checked. Where a path between
      * services drives a street the trip services later, that street is serviced on the first pass
      * ({@link EarliestService}) and the trip is driven again between its services in their new order,
      * while that shortens it.
      */
-    private List<Trip> trips(Tasks tasks, List<int[]> refs) {
+    private List<Trip> trips(Tasks tasks, List<int[]> refs, Distances distances) {
         DijkstraSearch search = new DijkstraSearch(network, Heading.OUTBOUND);
         List<Trip> trips = new ArrayList<>();
         for (int[] trip : refs) {
@@ -291,15 +307,21 @@ public final class TripPlanner {
                 demand += tasks.demand(ref);
                 mustCover[k] = services[k][0];
             }
-            Tour tour = EarliestService.of(drive(search, services));
+            int from = depot;
+            int to = depot;
+            if (distances instanceof NearestHome home) {
+                from = home.nearestFrom(services[0][1]);
+                to = home.nearestTo(services[services.length - 1][2]);
+            }
+            Tour tour = EarliestService.of(drive(search, services, from, to));
             while (true) {
-                Tour again = EarliestService.of(drive(search, servicesOf(tour)));
+                Tour again = EarliestService.of(drive(search, servicesOf(tour), from, to));
                 if (again.length(network) >= tour.length(network) - 1e-9) {
                     break;
                 }
                 tour = again;
             }
-            List<String> problems = TourValidator.problems(network, tour, mustCover);
+            List<String> problems = TourValidator.problems(network, tour, ServiceDemand.everyEdge(network), mustCover, to);
             if (!problems.isEmpty()) {
                 throw new IllegalStateException("invalid trip: " + problems);
             }
@@ -308,6 +330,27 @@ public final class TripPlanner {
             trips.add(new Trip(tour, length, service, demand, over));
         }
         return trips;
+    }
+
+    /**
+     * The trip's services, in their order, driven from {@code from} and ending at {@code to} by shortest
+     * paths (a trip that starts or ends at a reload point instead of the depot), checked like every trip.
+     */
+    public Trip redriven(Trip trip, int from, int to) {
+        int[][] services = servicesOf(trip.tour());
+        DijkstraSearch search = new DijkstraSearch(network, Heading.OUTBOUND);
+        Tour tour = drive(search, services, from, to);
+        int[] mustCover = new int[services.length];
+        for (int k = 0; k < services.length; k++) {
+            mustCover[k] = services[k][0];
+        }
+        List<String> problems = TourValidator.problems(network, tour, ServiceDemand.everyEdge(network), mustCover, to);
+        if (!problems.isEmpty()) {
+            throw new IllegalStateException("invalid trip: " + problems);
+        }
+        double length = tour.length(network);
+        boolean over = !settings.limit().allows(trip.service(), length - trip.service(), trip.demand());
+        return new Trip(tour, length, trip.service(), trip.demand(), over);
     }
 
     /** The services of a tour in driving order, each as {edge, entry node, exit node}. */
@@ -321,17 +364,17 @@ public final class TripPlanner {
         return services.toArray(int[][]::new);
     }
 
-    /** A walk from the depot through the services in order, by shortest paths, and back. */
-    private Tour drive(DijkstraSearch search, int[][] services) {
+    /** A walk from {@code from} through the services in order, by shortest paths, to {@code to}. */
+    private Tour drive(DijkstraSearch search, int[][] services, int from, int to) {
         List<int[]> steps = new ArrayList<>();
-        int at = depot;
+        int at = from;
         for (int[] s : services) {
             at = connect(search, at, s[1], steps);
             steps.add(new int[] {s[0], network.from(s[0]) == s[1] ? 1 : 0, 1});
             at = s[2];
         }
-        connect(search, at, depot, steps);
-        return toTour(steps);
+        connect(search, at, to, steps);
+        return toTour(steps, from);
     }
 
     private int connect(DijkstraSearch search, int from, int to, List<int[]> steps) {
@@ -350,7 +393,7 @@ public final class TripPlanner {
         return to;
     }
 
-    private Tour toTour(List<int[]> steps) {
+    private Tour toTour(List<int[]> steps, int start) {
         int[] edges = new int[steps.size()];
         boolean[] forward = new boolean[steps.size()];
         boolean[] service = new boolean[steps.size()];
@@ -359,6 +402,6 @@ public final class TripPlanner {
             forward[i] = steps.get(i)[1] == 1;
             service[i] = steps.get(i)[2] == 1;
         }
-        return new Tour(depot, edges, forward, service);
+        return new Tour(start, edges, forward, service);
     }
 }

@@ -88,4 +88,52 @@ class FleetPlannerTest {
         assertTrue(swept.overlapShare() < cutOverlap, swept.overlapShare() + " against " + cutOverlap);
         assertEquals(1, swept.vehicles().get(0).trips().size(), "no trip limit: one trip per vehicle");
     }
+
+    /**
+     * Load and reloads: a rate per kilometre (0.14 t/km, a common-practice order of magnitude for salt on a
+     * two-lane road) and a capacity of 0.6 t; every trip carries at most its capacity, the first trip of each
+     * vehicle leaves the depot, each next one leaves from where the one before ended (the depot or the reload
+     * point), the last returns to the depot, and the fleet still services every street as the tour does.
+     */
+    @Test
+    void tripsCarryAtMostTheCapacityAndChainThroughTheReloadPoint() {
+        double[] demand = StreetDemand.of(network, null, 0.14, null, FieldFixtures.DEMO_TOWN);
+        double total = 0;
+        for (int e = 0; e < network.edgeCount(); e++) {
+            assertEquals(0.14 * network.length(e) / 1000, demand[e], 1e-12);
+            total += network.required(e) ? demand[e] : 0;
+        }
+        int reload = org.streetcomb.network.NearestNode.of(network, -31.182, 44.607).node();
+        for (int vehicles = 1; vehicles <= 2; vehicles++) {
+            FleetSettings settings = new FleetSettings(vehicles, TripLimit.capacity(0.6), Double.POSITIVE_INFINITY, 10, 30,
+                    1, 7, List.of(reload));
+            Fleet fleet = new FleetPlanner(network, plan.depot(), settings).plan(plan.tours().get(0), demand);
+            double carried = 0;
+            int[] serviced = new int[network.edgeCount()];
+            for (VehicleDay day : fleet.vehicles()) {
+                int at = plan.depot();
+                for (int t = 0; t < day.trips().size(); t++) {
+                    Trip trip = day.trips().get(t);
+                    Tour tour = trip.tour();
+                    assertEquals(at, tour.start(), "a trip leaves from where the one before ended");
+                    at = tour.end(network);
+                    assertTrue(at == plan.depot() || at == reload, "trips end at the depot or the reload point");
+                    assertTrue(trip.demand() <= 0.6 + 1e-9, "load " + trip.demand());
+                    assertEquals(List.of(), TourValidator.problems(network, tour,
+                            org.streetcomb.solve.ServiceDemand.everyEdge(network), new int[0], at));
+                    carried += trip.demand();
+                    for (int i = 0; i < tour.steps(); i++) {
+                        if (tour.service()[i]) {
+                            serviced[tour.edges()[i]]++;
+                        }
+                    }
+                }
+                assertEquals(plan.depot(), at, "the day ends at the depot");
+            }
+            assertEquals(total, carried, 1e-6, "the load spread is the streets' demand");
+            for (int e = 0; e < network.edgeCount(); e++) {
+                assertEquals(network.required(e) ? 1 : 0, serviced[e], "edge " + e);
+            }
+        }
+    }
 }
