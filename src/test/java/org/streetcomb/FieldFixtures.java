@@ -5,7 +5,7 @@ import org.streetcomb.network.LonLat;
 import org.streetcomb.plan.Plan;
 import org.streetcomb.plan.PlanRequest;
 import org.streetcomb.plan.Planner;
-import org.streetcomb.plan.StageClock;
+import org.streetcomb.timing.StageClock;
 
 /** Plans of the fixtures the field-output tests share (the demo town is invented: demo data only). */
 public final class FieldFixtures {

@@ -10,14 +10,14 @@ import java.math.RoundingMode;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.Locale;
-import org.streetcomb.coverage.Audit;
+import org.streetcomb.plan.Audit;
 import org.streetcomb.coverage.CoverageReport;
 import org.streetcomb.coverage.CoverageStatus;
-import org.streetcomb.coverage.MatchSettings;
-import org.streetcomb.coverage.MatchTally;
+import org.streetcomb.match.MatchSettings;
+import org.streetcomb.match.MatchTally;
 import org.streetcomb.coverage.StreetCoverage;
-import org.streetcomb.coverage.TrackFileResult;
-import org.streetcomb.plan.StageClock;
+import org.streetcomb.plan.TrackFileResult;
+import org.streetcomb.timing.StageClock;
 
 /**
  * The summary of a coverage audit, built once and printed as text or as JSON, so both carry the same

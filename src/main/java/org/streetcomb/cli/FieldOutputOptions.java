@@ -8,7 +8,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 import org.streetcomb.plan.Plan;
-import org.streetcomb.plan.StageClock;
+import org.streetcomb.timing.StageClock;
 import org.streetcomb.tour.Direction;
 import org.streetcomb.tour.Directions;
 import org.streetcomb.tour.EdgeBearings;

@@ -13,7 +13,7 @@ import org.streetcomb.check.HealthReport;
 import org.streetcomb.check.NetworkCheck;
 import org.streetcomb.network.NetworkBuilder;
 import org.streetcomb.network.StreetNetwork;
-import org.streetcomb.plan.StageClock;
+import org.streetcomb.timing.StageClock;
 import org.streetcomb.read.LayerReaders;
 import org.streetcomb.read.RoadLayer;
 import org.streetcomb.report.FindingLayers;

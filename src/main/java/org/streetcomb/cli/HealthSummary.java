@@ -13,7 +13,7 @@ import org.streetcomb.check.FindingKind;
 import org.streetcomb.check.HealthReport;
 import org.streetcomb.check.Severity;
 import org.streetcomb.network.StreetNetwork;
-import org.streetcomb.plan.StageClock;
+import org.streetcomb.timing.StageClock;
 
 /**
  * The summary of a health check, built once and printed as text or JSON, so both carry the same

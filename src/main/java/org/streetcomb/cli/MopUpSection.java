@@ -8,7 +8,7 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
-import org.streetcomb.coverage.MopUpPlanner;
+import org.streetcomb.mopup.MopUpPlanner;
 import org.streetcomb.plan.Plan;
 
 /** The mop-up tour's part of the audit summary: its length, deadhead, method, and the field files written. */

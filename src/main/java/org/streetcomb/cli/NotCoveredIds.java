@@ -6,7 +6,7 @@ import java.nio.charset.StandardCharsets;
 import java.nio.file.Path;
 import java.util.LinkedHashSet;
 import java.util.Set;
-import org.streetcomb.coverage.Audit;
+import org.streetcomb.plan.Audit;
 import org.streetcomb.coverage.CoverageStatus;
 import org.streetcomb.coverage.StreetCoverage;
 import org.streetcomb.write.AtomicFile;

@@ -8,7 +8,7 @@ import org.streetcomb.network.LonLat;
 import org.streetcomb.plan.Plan;
 import org.streetcomb.plan.PlanRequest;
 import org.streetcomb.plan.Planner;
-import org.streetcomb.plan.StageClock;
+import org.streetcomb.timing.StageClock;
 import org.streetcomb.report.PlanLayers;
 import org.streetcomb.write.TourGeoJsonWriter;
 import picocli.CommandLine;

@@ -13,7 +13,7 @@ import java.util.Locale;
 import java.util.Map;
 import org.streetcomb.network.StreetNetwork;
 import org.streetcomb.plan.Plan;
-import org.streetcomb.plan.StageClock;
+import org.streetcomb.timing.StageClock;
 import org.streetcomb.tour.Tour;
 import org.streetcomb.write.FieldCaution;
 

@@ -9,7 +9,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.stream.Collectors;
 import org.streetcomb.network.LonLat;
-import org.streetcomb.plan.StageClock;
+import org.streetcomb.timing.StageClock;
 import org.streetcomb.report.HtmlReportWriter;
 import org.streetcomb.report.MapGroup;
 import org.streetcomb.report.MapLayer;

@@ -9,7 +9,7 @@ import java.util.concurrent.ScheduledExecutorService;
 import java.util.concurrent.ScheduledFuture;
 import java.util.concurrent.TimeUnit;
 import java.util.concurrent.atomic.AtomicBoolean;
-import org.streetcomb.plan.StageClock;
+import org.streetcomb.timing.StageClock;
 
 /**
  * Shows on stderr the stages that run longer than a second: the stage name once a second has passed,

@@ -1,5 +1,7 @@
 package org.streetcomb.coverage;
 
+import org.streetcomb.match.DrivenIntervals;
+
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.IdentityHashMap;

@@ -1,5 +1,13 @@
 package org.streetcomb.coverage;
 
+import org.streetcomb.match.DrivenIntervals;
+import org.streetcomb.match.HmmMapMatcher;
+import org.streetcomb.match.MatchSettings;
+import org.streetcomb.match.MatchTally;
+import org.streetcomb.match.StreetIndex;
+import org.streetcomb.match.TrackCleaner;
+import org.streetcomb.match.TurningPockets;
+
 import java.util.List;
 import org.streetcomb.network.LocalFrame;
 import org.streetcomb.network.StreetNetwork;
@@ -41,12 +49,8 @@ public final class TrackCoverage {
     }
 
     public void accept(TrackSegment segment) {
-        tally.fixes += segment.size();
         TrackCleaner.Result cleaned = cleaner.clean(segment);
-        tally.backwards += cleaned.backwards();
-        tally.spikes += cleaned.spikes();
-        tally.splits += cleaned.splits();
-        tally.thinned += cleaned.thinned();
+        tally.addCleaned(segment.size(), cleaned);
         for (int[] run : cleaned.runs()) {
             TrackSegment corrected = segment;
             for (int pass = 0; driftWindow > 0 && pass < DRIFT_PASSES; pass++) {

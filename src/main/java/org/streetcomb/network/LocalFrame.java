@@ -1,6 +1,7 @@
 package org.streetcomb.network;
 
 import java.util.List;
+import org.locationtech.jts.geom.Envelope;
 import org.streetcomb.read.RoadFeature;
 
 /**
@@ -14,18 +15,26 @@ public record LocalFrame(double lon0, double lat0, double metresPerDegreeLon, do
     /** Mean radius of the WGS84 ellipsoid in metres (IUGG R1). */
     private static final double MEAN_RADIUS = 6_371_008.8;
 
-    /** A frame centred on the bounding box of the features. */
+    /** A frame centred on the bounding box of the features. O(number of features). */
     public static LocalFrame covering(List<RoadFeature> features) {
-        double minLon = Double.POSITIVE_INFINITY, maxLon = Double.NEGATIVE_INFINITY;
-        double minLat = Double.POSITIVE_INFINITY, maxLat = Double.NEGATIVE_INFINITY;
+        Envelope box = new Envelope();
         for (RoadFeature f : features) {
-            var env = f.line().getEnvelopeInternal();
-            minLon = Math.min(minLon, env.getMinX());
-            maxLon = Math.max(maxLon, env.getMaxX());
-            minLat = Math.min(minLat, env.getMinY());
-            maxLat = Math.max(maxLat, env.getMaxY());
+            box.expandToInclude(f.line().getEnvelopeInternal());
         }
-        return around((minLon + maxLon) / 2, (minLat + maxLat) / 2);
+        return centredOn(box);
+    }
+
+    /** A frame centred on the bounding box of the network's nodes. O(nodes). */
+    public static LocalFrame covering(StreetNetwork network) {
+        Envelope box = new Envelope();
+        for (int v = 0; v < network.nodeCount(); v++) {
+            box.expandToInclude(network.lon(v), network.lat(v));
+        }
+        return centredOn(box);
+    }
+
+    private static LocalFrame centredOn(Envelope box) {
+        return box.isNull() ? around(0, 0) : around((box.getMinX() + box.getMaxX()) / 2, (box.getMinY() + box.getMaxY()) / 2);
     }
 
     public static LocalFrame around(double lon0, double lat0) {

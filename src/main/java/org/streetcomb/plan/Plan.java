@@ -4,6 +4,7 @@ import java.util.List;
 import org.streetcomb.network.Components;
 import org.streetcomb.network.StreetNetwork;
 import org.streetcomb.read.ReadReport;
+import org.streetcomb.report.MappedTours;
 import org.streetcomb.solve.Augmentation;
 import org.streetcomb.tour.Tour;
 
@@ -21,7 +22,8 @@ import org.streetcomb.tour.Tour;
  * @param warnings      things the user should know about this plan, one line each
  */
 public record Plan(PlanRequest request, ReadReport read, StreetNetwork network, Components components, int depot,
-                   double depotDistance, Augmentation augmentation, List<Tour> tours, List<String> warnings) {
+                   double depotDistance, Augmentation augmentation, List<Tour> tours, List<String> warnings)
+        implements MappedTours {
 
     /** The same plan with its tours replaced (reordered, or cut into trips). */
     public Plan withTours(List<Tour> replaced) {

@@ -1,5 +1,7 @@
 package org.streetcomb.plan;
 
+import org.streetcomb.timing.StageClock;
+
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;

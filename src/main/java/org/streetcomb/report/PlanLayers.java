@@ -6,7 +6,7 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 import org.streetcomb.network.StreetNetwork;
-import org.streetcomb.plan.Plan;
+
 import org.streetcomb.read.RoadFeature;
 import org.streetcomb.tour.Tour;
 
@@ -34,17 +34,17 @@ public final class PlanLayers {
     private static final double MIN_ARROW_STEP = 6;
     private static final double METRES_PER_DEGREE = Math.PI / 180 * 6_371_008.8;
 
-    private final Plan plan;
+    private final MappedTours plan;
     private final StreetNetwork network;
     private final String noun;
 
-    private PlanLayers(Plan plan) {
+    private PlanLayers(MappedTours plan) {
         this.plan = plan;
         this.network = plan.network();
         this.noun = noun(plan);
     }
 
-    public static List<MapLayer> of(Plan plan) {
+    public static List<MapLayer> of(MappedTours plan) {
         List<MapLayer> layers = new ArrayList<>();
         layers.add(NetworkLayer.of(plan.network()));
         layers.addAll(tourLayers(plan));
@@ -52,12 +52,12 @@ public final class PlanLayers {
     }
 
     /** The layers of the tours alone, without the street network: for a map that draws the streets its own way. */
-    public static List<MapLayer> tourLayers(Plan plan) {
+    public static List<MapLayer> tourLayers(MappedTours plan) {
         return new PlanLayers(plan).layers();
     }
 
     /** One group per tour, so each tour can be shown alone. */
-    public static List<MapGroup> groups(Plan plan) {
+    public static List<MapGroup> groups(MappedTours plan) {
         String noun = noun(plan);
         List<MapGroup> groups = new ArrayList<>();
         for (int t = 0; t < plan.tours().size(); t++) {
@@ -71,7 +71,7 @@ public final class PlanLayers {
      * "Trip" when the plan's walks are trips cut from one tour (more than one leaves the depot), else "Tour"
      * (one walk, or one per separate part of the network, each from its own start).
      */
-    static String noun(Plan plan) {
+    static String noun(MappedTours plan) {
         long fromDepot = plan.tours().stream().filter(t -> t.start() == plan.depot()).count();
         return fromDepot > 1 ? "Trip" : "Tour";
     }

@@ -18,7 +18,7 @@ import org.streetcomb.network.StreetNetwork;
 import org.streetcomb.plan.Plan;
 import org.streetcomb.plan.PlanRequest;
 import org.streetcomb.plan.Planner;
-import org.streetcomb.plan.StageClock;
+import org.streetcomb.timing.StageClock;
 
 /**
  * Plans a tour of a generated street grid and prints one Markdown table row: edges, odd nodes, time per

@@ -164,12 +164,12 @@ class AuditCommandTest {
         assertEquals(summary.at("/mop_up/field/gpx/track_points").asInt(), babel.lines().filter(l -> !l.isBlank()).count());
 
         // drive the mop-up (simulated, like the first drive) and audit both drives: nothing is left
-        var audit = org.streetcomb.coverage.DriveAudit.run(new org.streetcomb.coverage.AuditRequest(Path.of(DEMO),
-                List.of(drive), 0.5, org.streetcomb.coverage.MatchSettings.defaults(), 0.9, false,
-                org.streetcomb.read.ReadOptions.DEFAULTS), new org.streetcomb.plan.StageClock(org.streetcomb.plan.StageClock.SILENT));
+        var audit = org.streetcomb.plan.DriveAudit.run(new org.streetcomb.plan.AuditRequest(Path.of(DEMO),
+                List.of(drive), 0.5, org.streetcomb.match.MatchSettings.defaults(), 0.9, false,
+                org.streetcomb.read.ReadOptions.DEFAULTS), new org.streetcomb.timing.StageClock(org.streetcomb.timing.StageClock.SILENT));
         StreetNetwork network = audit.coverage().network();
         int depot = NearestNode.of(network, -31.2, 44.6).node();
-        var planned = org.streetcomb.coverage.MopUpPlanner.plan(audit.coverage(), depot, depot, "demo");
+        var planned = org.streetcomb.mopup.MopUpPlanner.plan(audit.coverage(), depot, depot, "demo");
         Path second = dir.resolve("mop-up-drive.gpx");
         SimulatedDrive.writeGpx(second, SimulatedDrive.drive(planned.network(), planned.tours(),
                 new SimulatedDrive.Settings(20, 40, 1, 5, 10, 300, 2, 10), 8, SimulatedDrive.START + 86_400), true);

@@ -1,5 +1,10 @@
 package org.streetcomb.coverage;
 
+import org.streetcomb.match.MatchSettings;
+import org.streetcomb.plan.Audit;
+import org.streetcomb.plan.AuditRequest;
+import org.streetcomb.plan.DriveAudit;
+
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.io.IOException;
@@ -15,7 +20,7 @@ import org.streetcomb.network.Components;
 import org.streetcomb.network.NearestNode;
 import org.streetcomb.network.NetworkBuilder;
 import org.streetcomb.network.StreetNetwork;
-import org.streetcomb.plan.StageClock;
+import org.streetcomb.timing.StageClock;
 import org.streetcomb.read.GpxTrackReader;
 import org.streetcomb.read.LayerReaders;
 import org.streetcomb.read.ReadOptions;

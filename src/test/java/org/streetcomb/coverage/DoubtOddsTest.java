@@ -1,5 +1,9 @@
 package org.streetcomb.coverage;
 
+import org.streetcomb.match.MatchSettings;
+import org.streetcomb.coverage.CoverageStatus;
+import org.streetcomb.coverage.TrackCoverage;
+
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 import static org.streetcomb.coverage.MetreStreets.LAT;

@@ -1,5 +1,7 @@
 package org.streetcomb.coverage;
 
+import org.streetcomb.match.MatchSettings;
+
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 import static org.streetcomb.coverage.MetreStreets.street;

@@ -1,5 +1,9 @@
 package org.streetcomb.coverage;
 
+import org.streetcomb.match.MatchSettings;
+import org.streetcomb.coverage.StreetCoverage;
+import org.streetcomb.coverage.TrackCoverage;
+
 import static org.junit.jupiter.api.Assertions.assertTrue;
 import static org.streetcomb.coverage.MetreStreets.LAT;
 import static org.streetcomb.coverage.MetreStreets.M_LAT;

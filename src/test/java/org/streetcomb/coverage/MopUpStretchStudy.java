@@ -1,5 +1,8 @@
 package org.streetcomb.coverage;
 
+import org.streetcomb.match.DrivenIntervals;
+import org.streetcomb.mopup.MopUpPlanner;
+
 import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;

@@ -1,5 +1,7 @@
 package org.streetcomb.coverage;
 
+import org.streetcomb.match.MatchSettings;
+
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.io.IOException;

@@ -1,5 +1,7 @@
 package org.streetcomb.coverage;
 
+import org.streetcomb.match.MatchSettings;
+
 import java.util.ArrayList;
 import java.util.Collections;
 import java.util.IdentityHashMap;

@@ -1,5 +1,7 @@
 package org.streetcomb.plan;
 
+import org.streetcomb.timing.StageClock;
+
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 

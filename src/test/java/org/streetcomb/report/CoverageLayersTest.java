@@ -13,12 +13,12 @@ import javax.imageio.ImageIO;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.locationtech.jts.geom.Coordinate;
-import org.streetcomb.coverage.Audit;
-import org.streetcomb.coverage.AuditRequest;
-import org.streetcomb.coverage.DriveAudit;
-import org.streetcomb.coverage.MatchSettings;
+import org.streetcomb.plan.Audit;
+import org.streetcomb.plan.AuditRequest;
+import org.streetcomb.plan.DriveAudit;
+import org.streetcomb.match.MatchSettings;
 import org.streetcomb.coverage.StreetCoverage;
-import org.streetcomb.plan.StageClock;
+import org.streetcomb.timing.StageClock;
 import org.streetcomb.read.ReadOptions;
 
 /**

@@ -11,7 +11,7 @@ import org.streetcomb.network.LonLat;
 import org.streetcomb.plan.Plan;
 import org.streetcomb.plan.PlanRequest;
 import org.streetcomb.plan.Planner;
-import org.streetcomb.plan.StageClock;
+import org.streetcomb.timing.StageClock;
 import org.streetcomb.trip.Trip;
 import org.streetcomb.trip.TripLimit;
 import org.streetcomb.trip.TripPlanner;

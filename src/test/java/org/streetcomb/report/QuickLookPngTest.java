@@ -16,7 +16,7 @@ import org.streetcomb.network.StreetNetwork;
 import org.streetcomb.plan.Plan;
 import org.streetcomb.plan.PlanRequest;
 import org.streetcomb.plan.Planner;
-import org.streetcomb.plan.StageClock;
+import org.streetcomb.timing.StageClock;
 import org.streetcomb.tour.Tour;
 
 /** The PNG quick look of the demo plan: the stated size, read back by ImageIO, with the tour drawn where it runs. */

@@ -13,7 +13,7 @@ import org.streetcomb.network.LonLat;
 import org.streetcomb.plan.Plan;
 import org.streetcomb.plan.PlanRequest;
 import org.streetcomb.plan.Planner;
-import org.streetcomb.plan.StageClock;
+import org.streetcomb.timing.StageClock;
 
 /**
  * Benchmark of the HTML report and PNG quick look (run by docs/report-bench.sh, not by the tests): writes both

@@ -1,4 +1,4 @@
-package org.streetcomb.coverage;
+package org.streetcomb.match;
 
 import java.util.Arrays;
 import org.locationtech.jts.geom.Envelope;
@@ -38,7 +38,7 @@ public final class StreetIndex {
 
     public StreetIndex(StreetNetwork network) {
         this.network = network;
-        this.frame = frameAround(network);
+        this.frame = LocalFrame.covering(network);
         int m = network.edgeCount();
         firstPoint = new int[m + 1];
         for (int e = 0; e < m; e++) {
@@ -131,16 +131,4 @@ public final class StreetIndex {
         return -e - 2;
     }
 
-    /** A plane around the middle of the network's nodes. */
-    static LocalFrame frameAround(StreetNetwork network) {
-        double minLon = Double.POSITIVE_INFINITY, maxLon = Double.NEGATIVE_INFINITY;
-        double minLat = Double.POSITIVE_INFINITY, maxLat = Double.NEGATIVE_INFINITY;
-        for (int v = 0; v < network.nodeCount(); v++) {
-            minLon = Math.min(minLon, network.lon(v));
-            maxLon = Math.max(maxLon, network.lon(v));
-            minLat = Math.min(minLat, network.lat(v));
-            maxLat = Math.max(maxLat, network.lat(v));
-        }
-        return LocalFrame.around((minLon + maxLon) / 2, (minLat + maxLat) / 2);
-    }
 }

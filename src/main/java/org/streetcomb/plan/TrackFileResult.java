@@ -1,4 +1,4 @@
-package org.streetcomb.coverage;
+package org.streetcomb.plan;
 
 import java.nio.file.Path;
 import org.streetcomb.read.GpxContents;

@@ -1,4 +1,7 @@
-package org.streetcomb.coverage;
+package org.streetcomb.mopup;
+
+import org.streetcomb.coverage.CoverageReport;
+import org.streetcomb.coverage.MissedPart;
 
 import java.util.ArrayList;
 import java.util.Arrays;

@@ -1,4 +1,4 @@
-package org.streetcomb.coverage;
+package org.streetcomb.mopup;
 
 import org.streetcomb.network.StreetNetwork;
 import org.streetcomb.solve.ServiceDemand;

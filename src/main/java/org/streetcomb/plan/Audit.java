@@ -1,4 +1,7 @@
-package org.streetcomb.coverage;
+package org.streetcomb.plan;
+
+import org.streetcomb.coverage.CoverageReport;
+import org.streetcomb.match.MatchTally;
 
 import java.util.List;
 import org.streetcomb.read.ReadReport;

@@ -1,4 +1,6 @@
-package org.streetcomb.coverage;
+package org.streetcomb.plan;
+
+import org.streetcomb.match.MatchSettings;
 
 import java.nio.file.Path;
 import java.util.List;

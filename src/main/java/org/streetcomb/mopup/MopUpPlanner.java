@@ -1,4 +1,6 @@
-package org.streetcomb.coverage;
+package org.streetcomb.mopup;
+
+import org.streetcomb.coverage.CoverageReport;
 
 import java.util.List;
 import org.streetcomb.NoTourError;

@@ -1,4 +1,4 @@
-package org.streetcomb.plan;
+package org.streetcomb.timing;
 
 import java.util.ArrayList;
 import java.util.List;

@@ -1,4 +1,4 @@
-package org.streetcomb.coverage;
+package org.streetcomb.mopup;
 
 import java.util.ArrayList;
 import java.util.List;

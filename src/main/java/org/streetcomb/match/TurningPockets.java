@@ -1,4 +1,4 @@
-package org.streetcomb.coverage;
+package org.streetcomb.match;
 
 import java.util.ArrayList;
 import java.util.Arrays;
@@ -20,7 +20,7 @@ import org.streetcomb.read.Travel;
  * when the matched path entered a pocket, the whole pocket counts as driven. Larger dead-end structures are
  * left to the matcher. O(V + E) for the bridges, plus a bounded search beyond each bridge.
  */
-final class TurningPockets {
+public final class TurningPockets {
 
     /** Pockets larger than this many edges are not searched for. */
     private static final int MOST_EDGES = 64;
@@ -29,7 +29,7 @@ final class TurningPockets {
     }
 
     /** Whether each node lies on a pocket: a street that reaches one ends there, as far as a crew turning is concerned. */
-    static boolean[] nodes(StreetNetwork network, List<int[]> pockets) {
+    public static boolean[] nodes(StreetNetwork network, List<int[]> pockets) {
         boolean[] on = new boolean[network.nodeCount()];
         for (int[] pocket : pockets) {
             for (int e : pocket) {
@@ -41,7 +41,7 @@ final class TurningPockets {
     }
 
     /** The edge sets of the pockets of {@code network} that fit in a square of side {@code size} metres. */
-    static List<int[]> of(StreetNetwork network, LocalFrame frame, double size) {
+    public static List<int[]> of(StreetNetwork network, LocalFrame frame, double size) {
         List<int[]> pockets = new ArrayList<>();
         for (int bridge : Bridges.of(network)) {
             for (int side : new int[] {network.from(bridge), network.to(bridge)}) {
@@ -99,7 +99,7 @@ final class TurningPockets {
     }
 
     /** Credits every pocket the matched path entered as driven, in each permitted direction; needs merged intervals. */
-    static void credit(StreetNetwork network, List<int[]> pockets, DrivenIntervals driven) {
+    public static void credit(StreetNetwork network, List<int[]> pockets, DrivenIntervals driven) {
         List<int[]> entered = pockets.stream()
                 .filter(p -> Arrays.stream(p).anyMatch(e -> driven.of(e, true).length > 0 || driven.of(e, false).length > 0))
                 .toList();

@@ -1,4 +1,4 @@
-package org.streetcomb.coverage;
+package org.streetcomb.match;
 
 /**
  * The parameters of map matching.

@@ -1,4 +1,9 @@
-package org.streetcomb.coverage;
+package org.streetcomb.write;
+
+import org.streetcomb.coverage.CoverageReport;
+import org.streetcomb.coverage.EdgeSlice;
+import org.streetcomb.coverage.MissedPart;
+import org.streetcomb.coverage.StreetCoverage;
 
 import com.fasterxml.jackson.core.JsonEncoding;
 import com.fasterxml.jackson.core.JsonFactory;

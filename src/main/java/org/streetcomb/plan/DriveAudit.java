@@ -1,4 +1,8 @@
-package org.streetcomb.coverage;
+package org.streetcomb.plan;
+
+import org.streetcomb.coverage.CoverageReport;
+import org.streetcomb.coverage.TrackCoverage;
+import org.streetcomb.match.MatchTally;
 
 import java.nio.file.Path;
 import java.util.ArrayList;
@@ -6,9 +10,10 @@ import java.util.List;
 import java.util.Locale;
 import java.util.function.Consumer;
 import org.streetcomb.InputError;
+import org.streetcomb.network.LocalFrame;
 import org.streetcomb.network.NetworkBuilder;
 import org.streetcomb.network.StreetNetwork;
-import org.streetcomb.plan.StageClock;
+import org.streetcomb.timing.StageClock;
 import org.streetcomb.read.GpxContents;
 import org.streetcomb.read.GpxTrackReader;
 import org.streetcomb.read.LayerReaders;
@@ -44,14 +49,14 @@ public final class DriveAudit {
         List<TrackFileResult> files = clock.time("match", () -> {
             List<TrackFileResult> results = new ArrayList<>();
             for (Path file : request.tracks()) {
-                int matchedBefore = tally.matched;
-                int offBefore = tally.offNetwork;
+                int matchedBefore = tally.matched();
+                int offBefore = tally.offNetwork();
                 GpxContents contents = new GpxTrackReader().read(file, segment -> {
                     extent.add(segment);
                     seen.accept(segment);
                     coverage.accept(segment);
                 });
-                results.add(new TrackFileResult(file, contents, tally.matched - matchedBefore, tally.offNetwork - offBefore));
+                results.add(new TrackFileResult(file, contents, tally.matched() - matchedBefore, tally.offNetwork() - offBefore));
             }
             return results;
         });
@@ -72,7 +77,7 @@ public final class DriveAudit {
         }
         int matched = files.stream().mapToInt(TrackFileResult::matched).sum();
         if (matched == 0) {
-            var layer = StreetIndex.frameAround(network);
+            var layer = LocalFrame.covering(network);
             throw new InputError(String.format(Locale.ROOT,
                     "no track point could be placed on a street of %s: none of the %d points lies within %.0f m of a "
                     + "street; the tracks are around %.5f,%.5f and the layer around %.5f,%.5f: check that they cover "

@@ -1,4 +1,4 @@
-package org.streetcomb.coverage;
+package org.streetcomb.match;
 
 /** Running counts of what happened to the fixes of all tracks during cleaning and matching. */
 public final class MatchTally {
@@ -11,6 +11,15 @@ public final class MatchTally {
     int matched;
     int breaks;
     int chains;
+
+    /** Counts a segment of {@code fixes} fixes and what cleaning it removed or split. */
+    public void addCleaned(int fixes, TrackCleaner.Result cleaned) {
+        this.fixes += fixes;
+        backwards += cleaned.backwards();
+        spikes += cleaned.spikes();
+        splits += cleaned.splits();
+        thinned += cleaned.thinned();
+    }
 
     /** Fixes read from the tracks. */
     public int fixes() {

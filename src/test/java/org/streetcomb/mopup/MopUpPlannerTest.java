@@ -1,4 +1,8 @@
-package org.streetcomb.coverage;
+package org.streetcomb.mopup;
+
+import org.streetcomb.coverage.CoverageReport;
+import org.streetcomb.coverage.StreetCoverageAccounting;
+import org.streetcomb.match.DrivenIntervals;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
