@@ -24,12 +24,17 @@ import org.streetcomb.read.Travel;
  *     undirected pass;</li>
  * <li>the even remainder is oriented along closed trails, which keeps every node balanced;</li>
  * <li>with every service pass now directed, the deadhead is re-solved exactly as a directed postman
- *     problem (never longer), then single service directions are flipped and the flow re-solved while
- *     that shortens the tour (at most {@link #FLIPS} trials), in the spirit of the improvement
- *     procedures of Pearn &amp; Liu (Computers &amp; OR 22, 1995).</li>
+ *     problem (never longer); the same is done for the orientation the LP bound's solution leans to
+ *     ({@link MixedLpBound}: each two-way street in the direction the LP drives more, MIXED2's where it
+ *     is even), and the shorter is kept;</li>
+ * <li>single service directions are flipped and the flow re-solved while that shortens the tour (at most
+ *     {@link #FLIPS} trials), in the spirit of the improvement procedures of Pearn &amp; Liu (Computers
+ *     &amp; OR 22, 1995).</li>
  * </ol>
- * Lower bound: the larger of the undirected relaxation (service plus a minimum-cost pairing of odd nodes,
- * one-way restrictions ignored) and the INOUTDEGREE flow (service plus the flow's cost, parity relaxed).
+ * Lower bound: the largest of the undirected relaxation (service plus a minimum-cost pairing of odd nodes,
+ * one-way restrictions ignored), the INOUTDEGREE flow (service plus the flow's cost, parity relaxed) and
+ * the LP relaxation with odd cuts ({@link MixedLpBound}, up to {@link #LP_MAX_EDGES} streets); the method
+ * string names the one used. Where the tour meets the bound it is reported optimal.
  */
 public final class MixedPostman implements PostmanSolver {
 
@@ -61,7 +66,8 @@ public final class MixedPostman implements PostmanSolver {
 
     @Override
     public String method() {
-        return "Frederickson 1979 MIXED2 with exact re-balancing and direction flips; lower bound from the LP relaxation with odd cuts (Nobert & Picard 1996)";
+        return "Frederickson 1979 MIXED2 and an LP-guided orientation with exact re-balancing and direction flips; "
+                + "lower bound from the LP relaxation with odd cuts (Nobert & Picard 1996)";
     }
 
     @Override
@@ -142,8 +148,9 @@ public final class MixedPostman implements PostmanSolver {
         }
         double service = demand.length(network);
         double total = best.traversals().length(network);
-        double bound = lowerBound(problem);
-        String boundMethod = "undirected and flow relaxations";
+        // the LP's first round is the flow relaxation, so with the LP only the undirected one is added
+        double bound = lowerBound(problem, lp == null);
+        String boundMethod = lp == null ? "undirected and flow relaxations" : "undirected relaxation";
         if (lp != null && lp.bound() > bound) {
             bound = lp.bound();
             boundMethod = lp.describe();
@@ -209,6 +216,11 @@ public final class MixedPostman implements PostmanSolver {
 
     /** The larger of the undirected relaxation and the INOUTDEGREE flow relaxation, metres. */
     public static double lowerBound(PostmanProblem problem) {
+        return lowerBound(problem, true);
+    }
+
+    /** The undirected relaxation, and the INOUTDEGREE flow relaxation if asked, metres. */
+    private static double lowerBound(PostmanProblem problem, boolean withFlow) {
         StreetNetwork network = problem.network();
         ServiceDemand demand = problem.demand();
         double service = demand.length(network);
@@ -217,8 +229,8 @@ public final class MixedPostman implements PostmanSolver {
             undirected[e] = demand.passes(e);
         }
         double matching = UndirectedPostman.addMatching(problem, undirected).cost();
-        Oriented flow = inOutDegree(problem, demand.along(), demand.against(), demand.either());
-        return service + Math.max(matching, flow.flowCost);
+        double flow = withFlow ? inOutDegree(problem, demand.along(), demand.against(), demand.either()).flowCost : 0;
+        return service + Math.max(matching, flow);
     }
 
     /** Traversals under construction: directed passes, passes still without a direction, and the flow cost. */
