@@ -155,6 +155,8 @@ public final class FieldOutputOptions {
         turns.put("straight_ons", counts.straightOns());
         turns.put("transitions", counts.transitions());
         turns.put("u_turns_per_100km", round(counts.per100Km(counts.uTurns())));
+        turns.put("u_turns_outside_dead_ends", counts.uTurnsOutsideDeadEnds());
+        turns.put("u_turns_outside_dead_ends_per_100km", round(counts.per100Km(counts.uTurnsOutsideDeadEnds())));
         turns.put("crossing_turns_per_100km", round(counts.per100Km(counts.crossingTurns())));
         turns.put("straight_ons_per_100km", round(counts.per100Km(counts.straightOns())));
         turns.put("order", plainOrder ? "plain" : "turn-aware");
@@ -162,9 +164,11 @@ public final class FieldOutputOptions {
         turns.put("plain_order_crossing_turns", plainCounts.crossingTurns());
         turns.put("plain_order_straight_ons", plainCounts.straightOns());
         text.add(new String[] {"Turns", String.format(Locale.ROOT,
-                "%d U-turns, %d crossing turns (%s-hand traffic), %d straight on; per 100 km: %.1f, %.1f, %.1f",
-                counts.uTurns(), counts.crossingTurns(), side.name().toLowerCase(Locale.ROOT), counts.straightOns(),
-                counts.per100Km(counts.uTurns()), counts.per100Km(counts.crossingTurns()),
+                "%d U-turns (%d outside dead ends), %d crossing turns (%s-hand traffic), %d straight on; per 100 km: "
+                        + "%.1f (%.1f), %.1f, %.1f",
+                counts.uTurns(), counts.uTurnsOutsideDeadEnds(), counts.crossingTurns(),
+                side.name().toLowerCase(Locale.ROOT), counts.straightOns(), counts.per100Km(counts.uTurns()),
+                counts.per100Km(counts.uTurnsOutsideDeadEnds()), counts.per100Km(counts.crossingTurns()),
                 counts.per100Km(counts.straightOns()))});
         if (!plainOrder) {
             text.add(new String[] {"", String.format(Locale.ROOT,

@@ -86,6 +86,7 @@ public final class PlanCommand implements Callable<Integer> {
         report.validate();
         PrintWriter stdout = spec.commandLine().getOut();
         StageClock clock = new StageClock(TerminalProgress.forCommandLine(quiet, System.err));
+        field.tripOptions.progress = quiet ? null : System.err::println;
         Plan plan = field.arrange(Planner.plan(new PlanRequest(input, depot, snap, depotReach, depotOnly, layer.readOptions(),
                 service.options(spec.commandLine())), repair.options(), clock), clock);
         if (out != null) {

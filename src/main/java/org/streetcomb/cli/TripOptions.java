@@ -83,6 +83,9 @@ public final class TripOptions {
                     + " for a vehicle's " + TripPlanner.LARGE_TASKS + " streets or fewer, 0 beyond).")
     Integer restarts;
 
+    /** Where the trip search's progress goes when more effort is asked for, or null for nowhere. */
+    java.util.function.Consumer<String> progress;
+
     /** How far a reload point may lie from the nearest street node (as the depot's default reach). */
     static final double RELOAD_REACH_METRES = 500;
 
@@ -154,7 +157,11 @@ public final class TripOptions {
         FleetSettings settings = new FleetSettings(vehicles == null ? 1 : vehicles, limit,
                 shiftHours == null ? Double.POSITIVE_INFINITY : shiftHours, serviceSpeed, travelSpeed,
                 restarts == null ? TripPlanner.AUTO : restarts, 1, reloads);
-        return new FleetPlanner(plan.network(), plan.depot(), settings).plan(plan.tours().get(0), demand);
+        FleetPlanner planner = new FleetPlanner(plan.network(), plan.depot(), settings);
+        if (progress != null && restarts != null && restarts > 0) {
+            planner.withProgress(progress);
+        }
+        return planner.plan(plan.tours().get(0), demand);
     }
 
 

@@ -3,6 +3,7 @@ package org.streetcomb.fleet;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
+import java.util.function.Consumer;
 import org.streetcomb.network.StreetNetwork;
 import org.streetcomb.tour.Tour;
 import org.streetcomb.trip.Trip;
@@ -41,6 +42,15 @@ public final class FleetPlanner {
         this.trips = new TripPlanner(network, depot, cut);
         this.viaReloads = settings.reloads().isEmpty() ? null : new TripPlanner(network, depot, cut,
                 settings.reloads().stream().mapToInt(Integer::intValue).toArray());
+    }
+
+    /** This planner, telling {@code listener} of the trip search's progress, vehicle by vehicle. */
+    public FleetPlanner withProgress(Consumer<String> listener) {
+        trips.withProgress(listener);
+        if (viaReloads != null) {
+            viaReloads.withProgress(message -> listener.accept("via reload points: " + message));
+        }
+        return this;
     }
 
     /**

@@ -4,6 +4,7 @@ import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.List;
 import java.util.Random;
+import java.util.function.Consumer;
 import java.util.function.Supplier;
 import java.util.function.ToDoubleFunction;
 
@@ -49,10 +50,14 @@ final class MemeticSearch {
     private final Random random;
     private final List<Member> population = new ArrayList<>();
 
-    MemeticSearch(Decoder decoder, ToDoubleFunction<List<int[]>> score, Random random) {
+    private final Consumer<String> progress;
+
+    /** @param progress told of the search's progress, about every tenth of the children */
+    MemeticSearch(Decoder decoder, ToDoubleFunction<List<int[]>> score, Random random, Consumer<String> progress) {
         this.decoder = decoder;
         this.score = score;
         this.random = random;
+        this.progress = progress;
     }
 
     /**
@@ -81,7 +86,12 @@ final class MemeticSearch {
             }
         }
         population.sort(Comparator.comparingDouble(Member::score));
+        int every = Math.max(1, children / 10);
         for (int c = 0; c < children && population.size() > 1; c++) {
+            if (c % every == 0 && c > 0) {
+                progress.accept(String.format(java.util.Locale.ROOT, "trip search: %d of %d candidates, best total %.0f",
+                        c, children, population.get(0).score()));
+            }
             int[] order = crossover(tournament().order(), tournament().order());
             Member child = member(decoder.decode(order, random.nextDouble() < IMPROVE_RATE));
             int half = population.size() / 2;

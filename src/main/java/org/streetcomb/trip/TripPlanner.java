@@ -5,6 +5,7 @@ import java.util.Arrays;
 import java.util.BitSet;
 import java.util.List;
 import java.util.Random;
+import java.util.function.Consumer;
 import java.util.function.IntPredicate;
 import java.util.function.Supplier;
 import java.util.stream.IntStream;
@@ -81,6 +82,8 @@ public final class TripPlanner {
     private final StreetNetwork network;
     private final int depot;
     private final Settings settings;
+    /** Told of the memetic search's progress (for the command line's stderr). */
+    private Consumer<String> progress = message -> { };
     /** The depot, then the reload points. */
     private final int[] homes;
     /** The distance table over the ends of {@link #tableOf}'s services, or null where it would not fit. */
@@ -102,6 +105,12 @@ public final class TripPlanner {
         this.settings = settings;
         this.homes = IntStream.concat(IntStream.of(depot),
                 Arrays.stream(reloads).filter(r -> r != depot)).distinct().toArray();
+    }
+
+    /** This planner, telling {@code listener} of the search's progress. */
+    public TripPlanner withProgress(Consumer<String> listener) {
+        this.progress = listener;
+        return this;
     }
 
     /**
@@ -162,7 +171,7 @@ public final class TripPlanner {
             Supplier<int[]> orders = () -> drawn[0]++ % 2 == 0 ? nearestTaskOrder(tasks, distances, random)
                     : shuffled(tasks.size(), random);
             best = new MemeticSearch((giant, improveIt) -> solve(tasks, distances, neighbours, giant, improveIt),
-                    trips -> score(tasks, distances, trips, measure), random)
+                    trips -> score(tasks, distances, trips, measure), random, progress)
                     .run(best, orders, restarts * CHILDREN_PER_RESTART);
         }
         return new Result(trips(tasks, best, distances), improve, tasks.size(), improve && restarts > 0);

@@ -86,6 +86,8 @@ class FieldOutputOptionsTest {
             trips += vehicle.get("trips").asInt();
         }
         assertEquals(trips, fleet.at("/trips").size());
+        // a U-turn away from a dead end is still a U-turn: the counts nest
+        assertTrue(fleet.at("/turns/u_turns_outside_dead_ends").asInt() <= fleet.at("/turns/u_turns").asInt());
         assertEquals(over, fleet.at("/hours_over_shift").asDouble(), 0.002);
         assertTrue(over > 0, "central Vienna takes more than two quarter-hour shifts");
         for (JsonNode trip : fleet.at("/trips")) {
