@@ -55,7 +55,7 @@ public final class FleetStudy {
                 .append("trips by the min-max split of its order (the previous `--vehicles 2`); *after*: two swept areas ")
                 .append("(`--vehicles 2` now). Overlap: share of the service length with the other vehicle's streets ")
                 .append("within 200 m. U-turns outside dead ends per 100 km, over each vehicle's trips; the single tour's ")
-                .append("figure for reference. Seconds: trip planning on the shared 2-core machine, for orientation.\n\n")
+                .append("figure (turn-aware too) for reference. Seconds: trip planning on the shared 2-core machine, for orientation.\n\n")
                 .append("| town | streets | single tour km (U/100 km) | before: km, longest km, overlap, U/100 km, s ")
                 .append("| after: km, longest km, overlap, U/100 km, s |\n|---|---|---|---|---|\n");
         List<Object[]> towns = List.of(
@@ -82,7 +82,8 @@ public final class FleetStudy {
                 new ServiceOptions(org.streetcomb.solve.KerbMode.ONE_PASS, null, null, true)), new StageClock(StageClock.SILENT));
         EdgeBearings bearings = EdgeBearings.of(plan.network());
         Tour tour = plan.tours().get(0);
-        TurnCounts single = counts(plan, bearings, List.of(List.of(tour)));
+        TurnCounts single = counts(plan, bearings, List.of(List.of(
+                TurnAwareOrder.of(plan.network(), bearings, TrafficSide.RIGHT, tour))));
         long start = System.nanoTime();
         TripPlanner.Result cut = new TripPlanner(plan.network(), plan.depot(), new TripPlanner.Settings(
                 TripLimit.length(Double.POSITIVE_INFINITY), 2, TripPlanner.AUTO, 1)).plan(tour, null);
