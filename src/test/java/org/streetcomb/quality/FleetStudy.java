@@ -16,7 +16,7 @@ import org.streetcomb.plan.Plan;
 import org.streetcomb.plan.PlanRequest;
 import org.streetcomb.plan.Planner;
 import org.streetcomb.plan.ServiceOptions;
-import org.streetcomb.plan.StageClock;
+import org.streetcomb.timing.StageClock;
 import org.streetcomb.read.ReadOptions;
 import org.streetcomb.tour.EdgeBearings;
 import org.streetcomb.tour.Tour;
