@@ -73,6 +73,9 @@ public final class PlanCommand implements Callable<Integer> {
     @CommandLine.Mixin
     ServiceMixin service;
 
+    @CommandLine.Mixin
+    AreaOptions area;
+
     @CommandLine.Spec
     CommandLine.Model.CommandSpec spec;
 
@@ -88,7 +91,7 @@ public final class PlanCommand implements Callable<Integer> {
         StageClock clock = new StageClock(TerminalProgress.forCommandLine(quiet, System.err));
         field.tripOptions.progress = quiet ? null : System.err::println;
         Plan plan = field.arrange(Planner.plan(new PlanRequest(input, depot, snap, depotReach, depotOnly, layer.readOptions(),
-                service.options(spec.commandLine())), repair.options(), clock), clock);
+                service.options(spec.commandLine()).withArea(area.area(spec.commandLine()))), repair.options(), clock), clock);
         if (out != null) {
             clock.run("write", () -> new TourGeoJsonWriter(steps).write(out, plan.network(), plan.tours()));
         }

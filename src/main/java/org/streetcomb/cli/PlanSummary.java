@@ -163,6 +163,29 @@ final class PlanSummary {
         } else if (plan.tours().size() == 1) {
             line("Steps", "%d", plan.tours().get(0).steps());
         }
+        if (plan.area() != null) {
+            line("Area", "%s: streets inside serviced, roads within %.0f m of it used only to travel", plan.area().label(),
+                    plan.area().margin());
+        }
+        if (plan.leftOut().length > 0) {
+            double left = 0;
+            for (int e : plan.leftOut()) {
+                left += network.length(e);
+            }
+            boolean[] served = new boolean[network.edgeCount()];
+            double servedLength = 0;
+            for (Tour walk : plan.tours()) {
+                for (int i = 0; i < walk.steps(); i++) {
+                    int e = walk.edges()[i];
+                    if (walk.service()[i] && !served[e]) {
+                        served[e] = true;
+                        servedLength += network.length(e);
+                    }
+                }
+            }
+            line("Left out", "%.3f km (%.1f %% of the streets asked for) in %d edges: one-way streets cut them off",
+                    left / 1000, 100 * left / (left + servedLength), plan.leftOut().length);
+        }
         StringBuilder times = new StringBuilder();
         for (StageClock.Stage stage : stages) {
             times.append(times.length() == 0 ? "" : ", ").append(String.format(Locale.ROOT, "%s %.2f s", stage.name(), stage.seconds()));

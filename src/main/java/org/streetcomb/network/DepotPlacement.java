@@ -27,8 +27,17 @@ public final class DepotPlacement {
      */
     public static NearestNode.Hit place(StreetNetwork network, List<RoadFeature> features, LonLat requested,
                                         double maxDistance, Path file) {
+        return place(network, firstPoint(features.get(0)), requested, maxDistance, file);
+    }
+
+    /**
+     * @param near without a requested position, the depot is the node of the largest strongly connected
+     *             component nearest this point (the layer's first point, or the middle of a service area)
+     */
+    public static NearestNode.Hit place(StreetNetwork network, LonLat near, LonLat requested, double maxDistance,
+                                        Path file) {
         if (requested == null) {
-            return insideLargestStrongComponent(network, firstPoint(features.get(0)));
+            return insideLargestStrongComponent(network, near);
         }
         LonLat position = requested;
         NearestNode.Hit depot = NearestNode.of(network, position.lon(), position.lat());
@@ -60,7 +69,7 @@ public final class DepotPlacement {
         return NearestNode.of(network, near.lon(), near.lat(), v -> strong.of(v) == chosen);
     }
 
-    private static LonLat firstPoint(RoadFeature feature) {
+    public static LonLat firstPoint(RoadFeature feature) {
         var c = feature.line().getCoordinateN(0);
         return new LonLat(c.x, c.y);
     }

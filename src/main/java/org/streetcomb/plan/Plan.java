@@ -5,6 +5,7 @@ import org.streetcomb.network.Components;
 import org.streetcomb.network.StreetNetwork;
 import org.streetcomb.read.ReadReport;
 import org.streetcomb.report.MappedTours;
+import org.streetcomb.scope.ServiceArea;
 import org.streetcomb.solve.Augmentation;
 import org.streetcomb.tour.Tour;
 
@@ -20,15 +21,26 @@ import org.streetcomb.tour.Tour;
  * @param augmentation  the deadhead the solver added
  * @param tours         the tours, depot's component first
  * @param warnings      things the user should know about this plan, one line each
+ * @param leftOut       edges asked for but left out because one-way streets cut them off, in id order
  */
 public record Plan(PlanRequest request, ReadReport read, StreetNetwork network, Components components, int depot,
-                   double depotDistance, Augmentation augmentation, List<Tour> tours, List<String> warnings)
+                   double depotDistance, Augmentation augmentation, List<Tour> tours, List<String> warnings, int[] leftOut)
         implements MappedTours {
+
+    public Plan(PlanRequest request, ReadReport read, StreetNetwork network, Components components, int depot,
+                double depotDistance, Augmentation augmentation, List<Tour> tours, List<String> warnings) {
+        this(request, read, network, components, depot, depotDistance, augmentation, tours, warnings, new int[0]);
+    }
+
+    @Override
+    public ServiceArea area() {
+        return request.service().area();
+    }
 
     /** The same plan with its tours replaced (reordered, or cut into trips). */
     public Plan withTours(List<Tour> replaced) {
         return new Plan(request, read, network, components, depot, depotDistance, augmentation, List.copyOf(replaced),
-                warnings);
+                warnings, leftOut);
     }
 
     /** Total length of the streets the tours cover, metres. */

@@ -11,6 +11,10 @@ import org.streetcomb.check.OneWayTrapCheck;
 import org.streetcomb.check.RepairOptions;
 import org.streetcomb.network.Components;
 import org.streetcomb.network.DepotPlacement;
+import org.streetcomb.network.LonLat;
+import org.locationtech.jts.geom.Coordinate;
+import org.streetcomb.scope.AreaScope;
+import org.streetcomb.scope.ServiceArea;
 import org.streetcomb.network.NearestNode;
 import org.streetcomb.network.NetworkBuilder;
 import org.streetcomb.network.StreetNetwork;
@@ -43,13 +47,21 @@ public final class Planner {
                 ? new NetworkRepair.Result(layer, built, List.of())
                 : clock.time("repair", () -> NetworkRepair.apply(layer, built, request.snapTolerance(), repairs));
         repaired.done().forEach(done -> warnings.add("repaired: " + done));
-        StreetNetwork network = repaired.network();
-        if (network.edgeCount() == 0) {
+        StreetNetwork whole = repaired.network();
+        if (whole.edgeCount() == 0) {
             throw new NoTourError(request.input() + ": no street of positive length after noding");
         }
+        ServiceArea area = request.service().area();
+        AreaScope.Scoped scoped = area == null ? null : clock.time("scope", () -> AreaScope.apply(whole, area));
+        StreetNetwork network = scoped == null ? whole : scoped.network();
+        if (scoped != null && scoped.insideLength() == 0) {
+            throw new NoTourError(request.input().getFileName() + ": no street to service inside the area " + area.label());
+        }
         Components components = Components.of(network);
-        NearestNode.Hit depot = DepotPlacement.place(network, repaired.layer().features(), request.depot(),
-                request.maxDepotDistance(), request.input());
+        LonLat near = area == null ? DepotPlacement.firstPoint(repaired.layer().features().get(0))
+                : interiorPoint(area);
+        NearestNode.Hit depot = DepotPlacement.place(network, near, request.depot(), request.maxDepotDistance(),
+                request.input());
         if (components.count() > 1) {
             warnings.add(request.depotOnly()
                     ? String.format(Locale.ROOT, "the network has %d separate parts: only the depot's part is planned "
@@ -60,7 +72,8 @@ public final class Planner {
         }
         // with a cost field the solvers minimise cost: they see each edge's cost as its length
         StreetNetwork weighted = network.hasCosts() ? network.weightedByCost() : network;
-        PostmanProblem asked = PostmanSetup.problem(request, weighted, components, depot.node(), warnings);
+        PostmanProblem asked = PostmanSetup.problem(request, weighted, components, depot.node(),
+                scoped == null ? null : scoped.inside(), warnings);
         PostmanProblem problem;
         try {
             problem = ReachabilityCheck.check(asked, request.input().getFileName().toString(),
@@ -78,6 +91,18 @@ public final class Planner {
                     + "--depot on the main network (the health command lists one-way traps)");
         }
         return new Plan(request, layer.report(), network, components, depot.node(),
-                request.depot() != null ? depot.distance() : 0, augmentation, tours, List.copyOf(warnings));
+                request.depot() != null ? depot.distance() : 0, augmentation, tours, List.copyOf(warnings),
+                leftOut(asked, problem));
+    }
+
+    /** The edges the asked problem needs and the solved one does not: those one-way streets cut off. */
+    private static int[] leftOut(PostmanProblem asked, PostmanProblem solved) {
+        return java.util.stream.IntStream.range(0, asked.network().edgeCount())
+                .filter(e -> asked.demand().needs(e) && !solved.demand().needs(e)).toArray();
+    }
+
+    private static LonLat interiorPoint(ServiceArea area) {
+        Coordinate c = area.polygon().getInteriorPoint().getCoordinate();
+        return new LonLat(c.x, c.y);
     }
 }

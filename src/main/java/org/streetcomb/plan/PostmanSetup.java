@@ -23,10 +23,14 @@ final class PostmanSetup {
     private PostmanSetup() {
     }
 
+    /** @param inside for each edge, whether it lies in the service area; null when no area is given */
     static PostmanProblem problem(PlanRequest request, StreetNetwork network, Components components, int depot,
-                                  List<String> warnings) {
+                                  boolean[] inside, List<String> warnings) {
         ServiceOptions service = request.service();
         boolean[] required = required(request, network, warnings);
+        for (int e = 0; inside != null && e < required.length; e++) {
+            required[e] &= inside[e];
+        }
         int depotPart = components.of(depot);
         boolean any = false;
         for (int e = 0; e < required.length; e++) {

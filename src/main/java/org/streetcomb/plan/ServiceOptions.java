@@ -2,6 +2,7 @@ package org.streetcomb.plan;
 
 import java.nio.file.Path;
 import org.streetcomb.network.LonLat;
+import org.streetcomb.scope.ServiceArea;
 import org.streetcomb.solve.KerbMode;
 
 /**
@@ -15,11 +16,22 @@ import org.streetcomb.solve.KerbMode;
  *                   start or end, instead of refusing to plan
  * @param proveSeconds  when above zero, seek a proof of optimality (or a shorter tour) for at most this many
  *                   seconds after the heuristic ({@code CirculationSearch})
+ * @param area       service only the streets inside this area, travelling on the roads around it; null for
+ *                   the whole layer
  */
 public record ServiceOptions(KerbMode kerbs, Path serviceIds, LonLat end, boolean leaveOutCutOff,
-                             double proveSeconds) {
+                             double proveSeconds, ServiceArea area) {
 
     public static final ServiceOptions DEFAULTS = new ServiceOptions(KerbMode.ONE_PASS, null, null, false);
+
+    public ServiceOptions(KerbMode kerbs, Path serviceIds, LonLat end, boolean leaveOutCutOff, double proveSeconds) {
+        this(kerbs, serviceIds, end, leaveOutCutOff, proveSeconds, null);
+    }
+
+    /** These options with the service scoped to an area. */
+    public ServiceOptions withArea(ServiceArea scoped) {
+        return new ServiceOptions(kerbs, serviceIds, end, leaveOutCutOff, proveSeconds, scoped);
+    }
 
     public ServiceOptions(KerbMode kerbs, Path serviceIds, LonLat end, boolean leaveOutCutOff) {
         this(kerbs, serviceIds, end, leaveOutCutOff, 0);

@@ -173,20 +173,7 @@ final class GeoPackageReader implements LayerReader {
             tally.skip("null geometry");
             return lines;
         }
-        if (blob.length < 8 || blob[0] != 'G' || blob[1] != 'P') {
-            throw InputError.at(file, place, "geometry is not a GeoPackage geometry blob (no \"GP\" header)");
-        }
-        int envelope = (blob[3] >> 1) & 7;
-        if (envelope >= ENVELOPE_BYTES.length) {
-            throw InputError.at(file, place, "geometry header names an unknown envelope type " + envelope);
-        }
-        int header = 8 + ENVELOPE_BYTES[envelope];
-        Geometry geometry;
-        try {
-            geometry = new WKBReader().read(Arrays.copyOfRange(blob, header, blob.length));
-        } catch (ParseException | RuntimeException e) {
-            throw InputError.at(file, place, "geometry does not parse as WKB: " + e.getMessage());
-        }
+        Geometry geometry = geometry(blob, file, place);
         if (!(geometry instanceof LineString || geometry instanceof MultiLineString)) {
             tally.skip(geometry.getGeometryType() + " geometry");
             return lines;
@@ -202,7 +189,26 @@ final class GeoPackageReader implements LayerReader {
         return lines;
     }
 
-    private static String quote(String identifier) {
+    /** The geometry of a GeoPackage geometry blob (header, then WKB), in the layer's own coordinates. */
+    static Geometry geometry(byte[] blob, Path file, String place) {
+        if (blob.length < 8 || blob[0] != 'G' || blob[1] != 'P') {
+            throw InputError.at(file, place, "geometry is not a GeoPackage geometry blob (no \"GP\" header)");
+        }
+        int envelope = (blob[3] >> 1) & 7;
+        if (envelope >= ENVELOPE_BYTES.length) {
+            throw InputError.at(file, place, "geometry header names an unknown envelope type " + envelope);
+        }
+        int header = 8 + ENVELOPE_BYTES[envelope];
+        Geometry geometry;
+        try {
+            geometry = new WKBReader().read(Arrays.copyOfRange(blob, header, blob.length));
+        } catch (ParseException | RuntimeException e) {
+            throw InputError.at(file, place, "geometry does not parse as WKB: " + e.getMessage());
+        }
+        return geometry;
+    }
+
+    static String quote(String identifier) {
         return "\"" + identifier.replace("\"", "\"\"") + "\"";
     }
 

@@ -131,7 +131,7 @@ final class ShapefileReader implements LayerReader {
     }
 
     /** Records in the .shx index: (file length - 100 bytes) / 8, after checking its header. */
-    private static int indexedRecords(Path shx, String label) throws IOException {
+    static int indexedRecords(Path shx, String label) throws IOException {
         long size = Files.size(shx);
         try (InputStream in = Files.newInputStream(shx)) {
             byte[] head = in.readNBytes(100);
@@ -153,7 +153,7 @@ final class ShapefileReader implements LayerReader {
         throw InputError.at(sibling(label, ".cpg"), null, "unknown character encoding '" + name + "'");
     }
 
-    private static Path sidecar(Path shp, String extension, String label) {
+    static Path sidecar(Path shp, String extension, String label) {
         Path found = find(shp, extension);
         if (found == null) {
             throw InputError.at(sibling(label, extension), null, "missing: a shapefile needs its " + extension
@@ -163,7 +163,7 @@ final class ShapefileReader implements LayerReader {
     }
 
     /** The file beside {@code shp} with the same base name and this extension, in any letter case. */
-    private static Path find(Path shp, String extension) {
+    static Path find(Path shp, String extension) {
         String name = shp.getFileName().toString();
         String base = name.substring(0, name.length() - 4);
         Path folder = shp.toAbsolutePath().getParent();
@@ -181,11 +181,11 @@ final class ShapefileReader implements LayerReader {
         return null;
     }
 
-    private static String sibling(String label, String extension) {
+    static String sibling(String label, String extension) {
         return label.substring(0, label.length() - 4) + extension;
     }
 
-    private static void deleteQuietly(Path folder) {
+    static void deleteQuietly(Path folder) {
         if (folder == null) {
             return;
         }

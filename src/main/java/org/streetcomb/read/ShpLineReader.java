@@ -17,8 +17,10 @@ import org.streetcomb.InputError;
  * Technical Description (ESRI white paper, July 1998): a 100-byte main header (file code 9994 and file
  * length in 16-bit words, big-endian; version 1000, shape type and bounding box, little-endian), then
  * records of an 8-byte big-endian header (record number, content length in words) and a little-endian
- * content. Only PolyLine (3), PolyLineZ (13) and PolyLineM (23) layers are read; their Z and M values
- * follow the x,y points and are skipped. Null shapes (0) are allowed in any layer.
+ * content. Road layers must be PolyLine (3), PolyLineZ (13) or PolyLineM (23); a reader made with
+ * {@link #anyShape} also takes Polygon (5, 15, 25: the same record layout, parts are rings) and Point (1, 11,
+ * 21) layers, for area and depot layers. Z and M values follow the x,y points and are skipped. Null shapes
+ * (0) are allowed in any layer.
  *
  * <p>Written by hand because no maintained .shp geometry reader is published on Maven Central apart
  * from large GIS stacks (see /work/shared/LIBRARIES.md); the record format is small and fully specified.
@@ -53,6 +55,15 @@ final class ShpLineReader implements Closeable {
 
     /** @param label how errors name the file (for a zip member, the zip and the member) */
     ShpLineReader(Path file, String label) throws IOException {
+        this(file, label, false);
+    }
+
+    /** A reader of line, polygon or point layers; {@link #shapeType()} says which. */
+    static ShpLineReader anyShape(Path file, String label) throws IOException {
+        return new ShpLineReader(file, label, true);
+    }
+
+    private ShpLineReader(Path file, String label, boolean anyShape) throws IOException {
         this.label = label;
         this.fileBytes = Files.size(file);
         this.in = new DataInputStream(new BufferedInputStream(Files.newInputStream(file), 1 << 16));
@@ -70,7 +81,12 @@ final class ShpLineReader implements Closeable {
             throw error(null, "unsupported shapefile version " + header.getInt(28) + " (expected 1000)");
         }
         shapeType = header.getInt(32);
-        if (shapeType != 3 && shapeType != 13 && shapeType != 23) {
+        boolean lines = shapeType == 3 || shapeType == 13 || shapeType == 23;
+        if (anyShape && !lines && !isPolygon(shapeType) && !isPoint(shapeType)) {
+            throw error(null, "shape type " + shapeType + " (" + SHAPE_NAMES.getOrDefault(shapeType, "unknown")
+                    + ") is not a line, polygon or point layer");
+        }
+        if (!anyShape && !lines) {
             throw error(null, "shape type " + shapeType + " (" + SHAPE_NAMES.getOrDefault(shapeType, "unknown")
                     + ") is not a line layer: expected PolyLine, PolyLineZ or PolyLineM road centrelines");
         }
@@ -78,6 +94,18 @@ final class ShpLineReader implements Closeable {
         minY = header.getDouble(44);
         maxX = header.getDouble(52);
         maxY = header.getDouble(60);
+    }
+
+    static boolean isPolygon(int type) {
+        return type == 5 || type == 15 || type == 25;
+    }
+
+    static boolean isPoint(int type) {
+        return type == 1 || type == 11 || type == 21;
+    }
+
+    int shapeType() {
+        return shapeType;
     }
 
     double minX() {
@@ -125,6 +153,12 @@ final class ShpLineReader implements Closeable {
         if (type != shapeType) {
             throw error(records, "shape type " + type + " (" + SHAPE_NAMES.getOrDefault(type, "unknown")
                     + ") in a layer of type " + shapeType);
+        }
+        if (isPoint(type)) {
+            if (contentBytes < 20) {
+                throw error(records, "record too short for a Point");
+            }
+            return new Shape(records, new double[][] {{content.getDouble(4), content.getDouble(12)}});
         }
         return new Shape(records, parts(content, contentBytes));
     }

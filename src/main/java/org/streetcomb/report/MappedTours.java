@@ -2,6 +2,7 @@ package org.streetcomb.report;
 
 import java.util.List;
 import org.streetcomb.network.StreetNetwork;
+import org.streetcomb.scope.ServiceArea;
 import org.streetcomb.tour.Tour;
 
 /** What a map of tours needs: the network, the depot node and the tours (a plan, or a mop-up). */
@@ -12,4 +13,14 @@ public interface MappedTours {
     int depot();
 
     List<Tour> tours();
+
+    /** Edges that were asked for but could not be planned (cut off by one-way streets), in id order. */
+    default int[] leftOut() {
+        return new int[0];
+    }
+
+    /** The area the streets were serviced in, or null for the whole layer. */
+    default ServiceArea area() {
+        return null;
+    }
 }
