@@ -19,6 +19,9 @@ import org.streetcomb.network.NearestNode;
 import org.streetcomb.network.StreetNetwork;
 import org.streetcomb.plan.Plan;
 import org.streetcomb.plan.PlanRequest;
+import org.streetcomb.plan.PlanScope;
+import org.streetcomb.plan.ServiceOptions;
+import org.streetcomb.solve.KerbMode;
 import org.streetcomb.timing.StageClock;
 import org.streetcomb.report.CoverageLayers;
 import org.streetcomb.report.MapGroup;
@@ -64,6 +67,21 @@ public final class AuditCommand implements Callable<Integer> {
 
     @Option(names = "--both-kerbs", description = "Each two-way street must be driven once in each direction.")
     boolean bothKerbs;
+
+    @Option(names = "--depot-part-only",
+            description = "As plan --depot-part-only: the plan covered only the network part that holds the depot; "
+                    + "streets on other parts are reported as left out of the plan, not missed.")
+    boolean depotOnly;
+
+    @Option(names = "--leave-out-cut-off",
+            description = "As plan --leave-out-cut-off: streets that one-way streets cut off from the depot are "
+                    + "reported as left out of the plan, not missed, and the mop-up leaves them out too.")
+    boolean leaveOutCutOff;
+
+    @Option(names = "--service-ids", paramLabel = "FILE",
+            description = "As plan --service-ids: only the streets listed in FILE were asked for; others are "
+                    + "reported as left out of the plan.")
+    Path serviceIds;
 
     @Option(names = "--streets-out", paramLabel = "FILE", description = "Write every street with its coverage status and share as GeoJSON.")
     Path streetsOut;
@@ -182,7 +200,7 @@ public final class AuditCommand implements Callable<Integer> {
         StageClock clock = new StageClock(TerminalProgress.forCommandLine(quiet, System.err));
         TrackLines seen = new TrackLines();
         Audit audit = DriveAudit.run(new AuditRequest(layerFile, tracks, layer.snap(), settings, coveredAt, bothKerbs,
-                layer.readOptions()), clock, report.requested() ? seen : segment -> { });
+                layer.readOptions(), scope()), clock, report.requested() ? seen : segment -> { });
         if (streetsOut != null) {
             clock.run("write streets", () -> CoverageGeoJsonWriter.writeStreets(streetsOut, audit.coverage()));
         }
@@ -222,6 +240,15 @@ public final class AuditCommand implements Callable<Integer> {
         String drive = tracks.size() == 1 ? tracks.get(0).getFileName().toString() : tracks.size() + " GPX files";
         report.write("Coverage: " + drive + " on " + layerFile.getFileName(), layers, groups, summary.json(), cautions,
                 clock);
+    }
+
+    /** What the plan asked for, when any of the plan's scope options is given; null audits every required street. */
+    private PlanScope scope() {
+        if (!depotOnly && !leaveOutCutOff && serviceIds == null) {
+            return null;
+        }
+        return new PlanScope(depot, depotReach, depotOnly, new ServiceOptions(
+                bothKerbs ? KerbMode.BOTH_KERBS : KerbMode.ONE_PASS, serviceIds, null, leaveOutCutOff));
     }
 
     private boolean mopUpRequested() {

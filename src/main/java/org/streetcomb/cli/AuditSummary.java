@@ -147,6 +147,10 @@ final class AuditSummary {
         s.line("Streets", "%d covered (at least %.0f %%), %d partly, %d missed, %d not required",
                 coverage.count(CoverageStatus.COVERED), 100 * coverage.threshold(), coverage.count(CoverageStatus.PARTLY),
                 coverage.count(CoverageStatus.MISSED), coverage.count(CoverageStatus.NOT_REQUIRED));
+        if (coverage.count(CoverageStatus.LEFT_OUT) > 0) {
+            s.line("Left out", "%d streets the plan did not ask for (cut off by one-way streets, another part, not "
+                    + "listed): not counted, not missed", coverage.count(CoverageStatus.LEFT_OUT));
+        }
         s.line("Missed", "%.3f km in %d part%s", coverage.missedLength() / 1000, coverage.missed().size(),
                 plural(coverage.missed().size()));
         if (coverage.wrongWay() > 0) {

@@ -9,7 +9,9 @@ public enum CoverageStatus {
     /** Less than {@link StreetCoverageAccounting#MISSED_BELOW} of it was driven. */
     MISSED("missed"),
     /** The street need not be serviced (only travelled on). */
-    NOT_REQUIRED("not required");
+    NOT_REQUIRED("not required"),
+    /** Required by the layer, but outside what the plan asked for (cut off by one-way streets, another part, not listed). */
+    LEFT_OUT("left out of the plan");
 
     private final String label;
 

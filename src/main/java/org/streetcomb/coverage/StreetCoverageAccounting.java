@@ -32,6 +32,15 @@ public final class StreetCoverageAccounting {
 
     public static CoverageReport account(StreetNetwork network, DrivenIntervals driven, double threshold,
                                          boolean bothKerbs) {
+        return account(network, driven, threshold, bothKerbs, null);
+    }
+
+    /**
+     * @param scope the edges the plan asked for, or null for every edge the layer requires; a required edge
+     *              outside it is not counted, and a street with no edge in it is {@link CoverageStatus#LEFT_OUT}
+     */
+    public static CoverageReport account(StreetNetwork network, DrivenIntervals driven, double threshold,
+                                         boolean bothKerbs, boolean[] scope) {
         List<RoadFeature> features = network.features();
         Map<RoadFeature, Integer> indexOf = new IdentityHashMap<>();
         for (int f = 0; f < features.size(); f++) {
@@ -43,6 +52,7 @@ public final class StreetCoverageAccounting {
         double[] done = new double[k];
         double[] wrong = new double[k];
         boolean[] hasEdges = new boolean[k];
+        boolean[] leftOut = new boolean[k];
         double[] edgeShare = new double[network.edgeCount()];
         List<MissedPart> missed = new ArrayList<>();
         List<WrongWayPart> wrongWay = new ArrayList<>();
@@ -79,7 +89,8 @@ public final class StreetCoverageAccounting {
             }
             length[f] += len;
             edgeShare[e] = need > 0 ? got / need : 1;
-            if (network.required(e)) {
+            leftOut[f] |= network.required(e) && !inScope(scope, e);
+            if (network.required(e) && inScope(scope, e)) {
                 needed[f] += need;
                 done[f] += got;
                 missed.addAll(parts);
@@ -92,7 +103,7 @@ public final class StreetCoverageAccounting {
                 continue;
             }
             double share = needed[f] > 0 ? done[f] / needed[f] : 1;
-            status[f] = needed[f] == 0 ? CoverageStatus.NOT_REQUIRED
+            status[f] = needed[f] == 0 ? (leftOut[f] ? CoverageStatus.LEFT_OUT : CoverageStatus.NOT_REQUIRED)
                     : share >= threshold ? CoverageStatus.COVERED
                     : share < MISSED_BELOW ? CoverageStatus.MISSED : CoverageStatus.PARTLY;
             streets.add(new StreetCoverage(features.get(f), length[f], needed[f], done[f], wrong[f], status[f]));
@@ -100,10 +111,14 @@ public final class StreetCoverageAccounting {
         boolean[] mopUp = new boolean[network.edgeCount()];
         for (int e = 0; e < network.edgeCount(); e++) {
             CoverageStatus s = status[indexOf.get(network.feature(e))];
-            mopUp[e] = network.required(e) && s != CoverageStatus.COVERED && edgeShare[e] < threshold;
+            mopUp[e] = network.required(e) && inScope(scope, e) && s != CoverageStatus.COVERED && edgeShare[e] < threshold;
         }
         return new CoverageReport(network, List.copyOf(streets), List.copyOf(missed), List.copyOf(wrongWay), mopUp,
                 threshold, bothKerbs);
+    }
+
+    private static boolean inScope(boolean[] scope, int edge) {
+        return scope == null || scope[edge];
     }
 
     /** Union of two sorted lists of disjoint intervals. */

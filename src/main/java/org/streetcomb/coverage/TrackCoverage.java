@@ -117,9 +117,14 @@ public final class TrackCoverage {
 
     /** Coverage per street of everything accepted; call once, after the last segment. */
     public CoverageReport report(double threshold, boolean bothKerbs) {
+        return report(threshold, bothKerbs, null);
+    }
+
+    /** As {@link #report(double, boolean)}, counting only the required edges in {@code scope} (null: all). */
+    public CoverageReport report(double threshold, boolean bothKerbs, boolean[] scope) {
         driven.merge();
         TurningPockets.credit(network, pockets, driven);
         driven.merge();
-        return StreetCoverageAccounting.account(network, driven, threshold, bothKerbs);
+        return StreetCoverageAccounting.account(network, driven, threshold, bothKerbs, scope);
     }
 }

@@ -10,7 +10,11 @@ import java.util.List;
 import java.util.Locale;
 import java.util.function.Consumer;
 import org.streetcomb.InputError;
+import org.streetcomb.network.Components;
+import org.streetcomb.network.DepotPlacement;
 import org.streetcomb.network.LocalFrame;
+import org.streetcomb.solve.PostmanProblem;
+import org.streetcomb.solve.ReachabilityCheck;
 import org.streetcomb.network.NetworkBuilder;
 import org.streetcomb.network.StreetNetwork;
 import org.streetcomb.timing.StageClock;
@@ -43,6 +47,8 @@ public final class DriveAudit {
         if (network.edgeCount() == 0) {
             throw InputError.at(request.layer(), null, "no street of positive length after noding");
         }
+        List<String> warnings = new ArrayList<>();
+        boolean[] scope = request.scope() == null ? null : scope(request, network, warnings);
         TrackCoverage coverage = clock.time("index", () -> new TrackCoverage(network, request.matching()));
         MatchTally tally = coverage.tally();
         TrackExtent extent = new TrackExtent();
@@ -60,10 +66,31 @@ public final class DriveAudit {
             }
             return results;
         });
-        List<String> warnings = new ArrayList<>();
         checkOverlap(request, files, network, extent, warnings);
-        CoverageReport report = clock.time("account", () -> coverage.report(request.threshold(), request.bothKerbs()));
+        CoverageReport report = clock.time("account", () -> coverage.report(request.threshold(), request.bothKerbs(),
+                scope));
         return new Audit(request, layer.report(), List.copyOf(files), tally, report, List.copyOf(warnings));
+    }
+
+    /**
+     * The edges the plan asked to service, derived as {@link Planner} derives them: the required streets (or
+     * the listed ids), the depot's part only if asked, less the streets one-way streets cut off when the plan
+     * left those out. The plan's warnings about what it left out are the audit's too.
+     */
+    private static boolean[] scope(AuditRequest request, StreetNetwork network, List<String> warnings) {
+        PlanScope scope = request.scope();
+        PlanRequest asked = new PlanRequest(request.layer(), scope.depot(), request.snapTolerance(), scope.depotReach(),
+                scope.depotOnly(), request.readOptions(), scope.service());
+        Components components = Components.of(network);
+        int depot = DepotPlacement.place(network, network.features(), scope.depot(), scope.depotReach(),
+                request.layer()).node();
+        PostmanProblem problem = ReachabilityCheck.check(PostmanSetup.problem(asked, network, components, depot, warnings),
+                request.layer().getFileName().toString(), scope.service().leaveOutCutOff(), warnings);
+        boolean[] inScope = new boolean[network.edgeCount()];
+        for (int e = 0; e < inScope.length; e++) {
+            inScope[e] = problem.demand().needs(e);
+        }
+        return inScope;
     }
 
     /** Refuses tracks that miss the network entirely, and warns about single files that do. */

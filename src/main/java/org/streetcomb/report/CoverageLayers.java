@@ -46,9 +46,11 @@ public final class CoverageLayers {
             CoverageStatus.COVERED, MapStyle.solid(COVERED, 3, 0.9),
             CoverageStatus.PARTLY, MapStyle.solid(PARTLY, 4, 0.95),
             CoverageStatus.MISSED, MapStyle.solid(MISSED, 5, 0.95),
-            CoverageStatus.NOT_REQUIRED, new MapStyle(NOT_REQUIRED, 2, 1, "4 4")));
+            CoverageStatus.NOT_REQUIRED, new MapStyle(NOT_REQUIRED, 2, 1, "4 4"),
+            CoverageStatus.LEFT_OUT, new MapStyle(NOT_REQUIRED, 3, 1, "1 5")));
     /** Statuses drawn one feature per street name. */
-    private static final Set<CoverageStatus> MERGED = EnumSet.of(CoverageStatus.COVERED, CoverageStatus.NOT_REQUIRED);
+    private static final Set<CoverageStatus> MERGED = EnumSet.of(CoverageStatus.COVERED, CoverageStatus.NOT_REQUIRED,
+            CoverageStatus.LEFT_OUT);
     /** Stretches shorter than this get no arrow: it would not be readable. */
     private static final double MIN_ARROW_PART = 6;
 
@@ -98,6 +100,10 @@ public final class CoverageLayers {
         if (!byStatus.get(CoverageStatus.NOT_REQUIRED).isEmpty()) {
             layers.add(status(CoverageStatus.NOT_REQUIRED, "Not required", "streets used only to travel between others",
                     byStatus, lines));
+        }
+        if (!byStatus.get(CoverageStatus.LEFT_OUT).isEmpty()) {
+            layers.add(status(CoverageStatus.LEFT_OUT, "Left out of the plan", "streets the plan did not ask for: cut "
+                    + "off by one-way streets, on another part, or not listed", byStatus, lines));
         }
         layers.add(status(CoverageStatus.COVERED, "Covered", "at least " + threshold + " of the street driven, one-way "
                 + "streets in their direction" + how, byStatus, lines));

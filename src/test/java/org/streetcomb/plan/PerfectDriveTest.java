@@ -1,0 +1,69 @@
+package org.streetcomb.plan;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+
+import java.io.IOException;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+import org.junit.jupiter.api.io.TempDir;
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.CsvSource;
+import org.streetcomb.coverage.CoverageReport;
+import org.streetcomb.coverage.CoverageStatus;
+import org.streetcomb.coverage.SimulatedDrive;
+import org.streetcomb.match.MatchSettings;
+import org.streetcomb.read.ReadOptions;
+import org.streetcomb.solve.KerbMode;
+import org.streetcomb.timing.StageClock;
+import org.streetcomb.tour.Direction;
+import org.streetcomb.tour.Directions;
+import org.streetcomb.tour.EdgeBearings;
+import org.streetcomb.tour.TrafficSide;
+import org.streetcomb.write.GpxLimits;
+import org.streetcomb.write.GpxTourWriter;
+
+/**
+ * A perfect drive audits perfect: a plan of a real network with one-way streets (OpenStreetMap windows of
+ * Monaco and Vienna, fixtures/benchmarks/mixed-osm, NOTICE), with the streets one-way streets cut off left
+ * out and only the depot's part planned, is audited in the same scope against its own GPX and against a
+ * timed drive along it (a fix each second, no noise, simulated). The tour obeys every one-way street
+ * (TourValidator checks it), so any wrong-way metre is the audit's error: the gate is zero. The target of
+ * issue 13 also asks for 100 % of the scope and nothing missed; that is not reached yet (a few short streets
+ * stay uncredited: Monaco 4 on the timed drive, 29 on the GPX), so the test prints the share and the counts instead of gating them.
+ */
+class PerfectDriveTest {
+
+    @TempDir
+    Path folder;
+
+    @ParameterizedTest(name = "{0}")
+    @CsvSource({"monaco.osm.pbf", "vienna-b.geojson"})
+    void theTourAndAOneHertzDriveAlongItHaveNoWrongWayMetre(String file) throws IOException {
+        Path layer = Path.of("fixtures/benchmarks/mixed-osm", file);
+        ServiceOptions service = new ServiceOptions(KerbMode.ONE_PASS, null, null, true);
+        Plan plan = Planner.plan(new PlanRequest(layer, null, 0.5, 500, true, ReadOptions.DEFAULTS, service),
+                new StageClock(StageClock.SILENT));
+        Path gpx = folder.resolve("tour.gpx");
+        EdgeBearings bearings = EdgeBearings.of(plan.network());
+        List<List<Direction>> sheets = new ArrayList<>();
+        plan.tours().forEach(t -> sheets.add(Directions.of(plan.network(), bearings, TrafficSide.RIGHT, t)));
+        new GpxTourWriter(new GpxLimits(2, GpxLimits.DEFAULT_TRACK_POINTS, GpxLimits.DEFAULT_ROUTE_POINTS, true))
+                .write(gpx, plan.network(), plan.depot(), plan.tours(), sheets, "Tour");
+        Path timed = folder.resolve("drive.gpx");
+        SimulatedDrive.writeGpx(timed, SimulatedDrive.drive(plan.network(), plan.tours(),
+                new SimulatedDrive.Settings(20, 40, 1, 1, 0, 0, 0, 0), 1, SimulatedDrive.START), true);
+        PlanScope scope = new PlanScope(null, 500, true, service);
+        for (Path track : List.of(timed, gpx)) {
+            CoverageReport report = DriveAudit.run(new AuditRequest(layer, List.of(track), 0.5, MatchSettings.defaults(),
+                    0.9, false, ReadOptions.DEFAULTS, scope), new StageClock(StageClock.SILENT)).coverage();
+            String what = file + ", " + track.getFileName();
+            assertEquals(0, report.wrongWay(), what + ": wrong-way metres");
+            System.out.printf(Locale.ROOT, "%s: %.1f %% of the plan's scope, %d streets missed or partly, %d left out%n",
+                    what, 100 * report.driven() / report.needed(),
+                    report.count(CoverageStatus.MISSED) + report.count(CoverageStatus.PARTLY),
+                    report.count(CoverageStatus.LEFT_OUT));
+        }
+    }
+}
