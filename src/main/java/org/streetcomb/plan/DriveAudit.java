@@ -84,7 +84,7 @@ public final class DriveAudit {
         Components components = Components.of(network);
         int depot = DepotPlacement.place(network, network.features(), scope.depot(), scope.depotReach(),
                 request.layer()).node();
-        PostmanProblem problem = ReachabilityCheck.check(PostmanSetup.problem(asked, network, components, depot, warnings),
+        PostmanProblem problem = ReachabilityCheck.check(PostmanSetup.problem(asked, network, components, depot, null, warnings),
                 request.layer().getFileName().toString(), scope.service().leaveOutCutOff(), warnings);
         boolean[] inScope = new boolean[network.edgeCount()];
         for (int e = 0; e < inScope.length; e++) {
