@@ -12,7 +12,7 @@ import picocli.CommandLine.Command;
         mixinStandardHelpOptions = true,
         versionProvider = Main.Version.class,
         description = "Plans the shortest tours that cover every street of a road network.",
-        subcommands = {PlanCommand.class, HealthCommand.class, AuditCommand.class, CommandLine.HelpCommand.class},
+        subcommands = {PlanCommand.class, DistrictsCommand.class, HealthCommand.class, AuditCommand.class, CommandLine.HelpCommand.class},
         exitCodeListHeading = "%nExit codes:%n",
         exitCodeList = {
             "0:success",

@@ -41,8 +41,17 @@ public final class Planner {
     /** Plans after making the repairs asked for; each repair made is listed among the plan's warnings. */
     public static Plan plan(PlanRequest request, RepairOptions repairs, StageClock clock) {
         RoadLayer layer = clock.time("read", () -> LayerReaders.read(request.input(), request.readOptions()));
-        List<String> warnings = new ArrayList<>();
         StreetNetwork built = clock.time("network", () -> new NetworkBuilder(request.snapTolerance()).build(layer));
+        return plan(request, layer, built, repairs, clock);
+    }
+
+    /**
+     * Plans on a layer already read and its network already built (a batch of areas plans many times on
+     * one network); the request's input names the layer in messages.
+     */
+    public static Plan plan(PlanRequest request, RoadLayer layer, StreetNetwork built, RepairOptions repairs,
+                            StageClock clock) {
+        List<String> warnings = new ArrayList<>();
         NetworkRepair.Result repaired = repairs.equals(RepairOptions.NONE)
                 ? new NetworkRepair.Result(layer, built, List.of())
                 : clock.time("repair", () -> NetworkRepair.apply(layer, built, request.snapTolerance(), repairs));

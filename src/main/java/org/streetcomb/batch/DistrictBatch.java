@@ -1,0 +1,201 @@
+package org.streetcomb.batch;
+
+import java.io.IOException;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+import java.util.concurrent.ExecutorService;
+import java.util.concurrent.Executors;
+import java.util.concurrent.Future;
+import java.util.concurrent.atomic.AtomicInteger;
+import java.util.function.Consumer;
+import org.locationtech.jts.geom.Geometry;
+import org.streetcomb.InputError;
+import org.streetcomb.NoTourError;
+import org.streetcomb.check.RepairOptions;
+import org.streetcomb.network.LonLat;
+import org.streetcomb.network.NetworkBuilder;
+import org.streetcomb.network.StreetNetwork;
+import org.streetcomb.plan.Plan;
+import org.streetcomb.plan.PlanRequest;
+import org.streetcomb.plan.Planner;
+import org.streetcomb.plan.ServiceOptions;
+import org.streetcomb.read.LayerReaders;
+import org.streetcomb.read.Place;
+import org.streetcomb.read.ReadOptions;
+import org.streetcomb.read.RoadLayer;
+import org.streetcomb.scope.AreaChoice;
+import org.streetcomb.scope.ServiceArea;
+import org.streetcomb.timing.StageClock;
+import org.streetcomb.tour.Directions;
+import org.streetcomb.tour.EdgeBearings;
+import org.streetcomb.tour.TrafficSide;
+import org.streetcomb.tour.Tour;
+import org.streetcomb.write.AtomicFile;
+import org.streetcomb.write.DirectionSheetWriter;
+import org.streetcomb.write.GpxLimits;
+import org.streetcomb.write.GpxTourWriter;
+import org.streetcomb.write.TourGeoJsonWriter;
+
+/**
+ * Plans every area of an area layer through the one planning pipeline ({@link Planner}): the road layer is
+ * read and its network built once, then each area is scoped and solved on its own thread (a fixed pool,
+ * every core by default). Each area gets a folder with its tour (GeoJSON), GPX and direction sheet; a
+ * summary table lists every area, planned or not. An area that cannot be planned (not a polygon, no street
+ * inside, depot outside, one-way cut-off) gets one line naming it, and the rest go on.
+ *
+ * <p>A street on a shared border, or in two overlapping areas, is serviced by the area that comes first
+ * in the layer and only travelled in the others ({@link ServiceArea#earlier()}), so a tiling of areas
+ * services every street once. Outputs are written in the layer's order whatever the thread count, so they
+ * are the same byte for byte.
+ */
+public final class DistrictBatch {
+
+    /** What to plan: every area of {@code areas}, each with its depot, on the roads of {@code roads}. */
+    public record Request(Path roads, ReadOptions read, Path areasFile, List<Place> areas, String depotField,
+                          double margin, boolean leaveOutCutOff, Path out, int threads) {
+    }
+
+    /** One row of the summary. */
+    public record Row(int index, String id, String label, String status, double serviceKm, double deadheadKm,
+                      double leftOutKm, String message) {
+    }
+
+    private DistrictBatch() {
+    }
+
+    public static List<Row> run(Request request, Consumer<String> progress) {
+        RoadLayer layer = LayerReaders.read(request.roads(), request.read());
+        StreetNetwork network = new NetworkBuilder(0.5).build(layer);
+        List<Place> areas = request.areas();
+        try {
+            Files.createDirectories(request.out());
+        } catch (IOException e) {
+            throw InputError.at(request.out(), null, "cannot create the output folder: " + e.getMessage());
+        }
+        AtomicInteger done = new AtomicInteger();
+        ExecutorService pool = Executors.newFixedThreadPool(Math.max(1, request.threads()));
+        try {
+            List<Future<Row>> futures = new ArrayList<>();
+            for (int i = 0; i < areas.size(); i++) {
+                final int index = i;
+                futures.add(pool.submit(() -> {
+                    Row row = planOne(request, layer, network, index);
+                    progress.accept(String.format(Locale.ROOT, "area %d of %d (%s): %s%s", done.incrementAndGet(),
+                            areas.size(), row.label(), row.status(), row.message().isEmpty() ? "" : ": " + row.message()));
+                    return row;
+                }));
+            }
+            List<Row> rows = new ArrayList<>();
+            for (Future<Row> f : futures) {
+                rows.add(f.get());
+            }
+            writeSummary(request.out().resolve("summary.csv"), rows);
+            return rows;
+        } catch (InterruptedException e) {
+            Thread.currentThread().interrupt();
+            throw new IllegalStateException(e);
+        } catch (java.util.concurrent.ExecutionException e) {
+            throw new IllegalStateException(e.getCause());
+        } finally {
+            pool.shutdown();
+        }
+    }
+
+    private static Row planOne(Request request, RoadLayer layer, StreetNetwork network, int index) {
+        Place place = request.areas().get(index);
+        String label = AreaChoice.label(place, null);
+        try {
+            Geometry polygon = AreaChoice.polygon(place, request.areasFile());
+            List<Geometry> earlier = new ArrayList<>();
+            for (int j = 0; j < index; j++) {
+                if (request.areas().get(j).isPolygonal() && request.areas().get(j).geometry().isValid()) {
+                    earlier.add(request.areas().get(j).geometry());
+                }
+            }
+            ServiceArea area = new ServiceArea(label, polygon, request.margin(), earlier);
+            LonLat depot = depot(request, place, polygon);
+            ServiceOptions service = new ServiceOptions(org.streetcomb.solve.KerbMode.ONE_PASS, null, null,
+                    request.leaveOutCutOff()).withArea(area);
+            PlanRequest planRequest = new PlanRequest(request.roads(), depot, 0.5, 500, false, request.read(), service);
+            Plan plan = Planner.plan(planRequest, layer, network, RepairOptions.NONE, new StageClock(StageClock.SILENT));
+            write(request.out().resolve(folder(index, place)), plan, label);
+            double left = 0;
+            for (int e : plan.leftOut()) {
+                left += plan.network().length(e);
+            }
+            return new Row(index + 1, place.id(), label, "planned", plan.serviceLength() / 1000,
+                    plan.deadheadLength() / 1000, left / 1000, "");
+        } catch (InputError | NoTourError e) {
+            return new Row(index + 1, place.id(), label, "failed", 0, 0, 0, e.getMessage());
+        }
+    }
+
+    /** The depot from the area's depot attribute ("lon,lat"), checked to lie in the area; null for the default. */
+    private static LonLat depot(Request request, Place place, Geometry polygon) {
+        if (request.depotField() == null) {
+            return null;
+        }
+        String raw = place.properties().get(request.depotField());
+        if (raw == null || raw.isBlank()) {
+            return null;
+        }
+        String[] parts = raw == null ? new String[0] : raw.split(",");
+        double lon, lat;
+        try {
+            lon = Double.parseDouble(parts[0].strip());
+            lat = Double.parseDouble(parts[1].strip());
+        } catch (RuntimeException e) {
+            throw InputError.at(request.areasFile(), "feature " + place.id(), request.depotField() + " holds "
+                    + (raw == null ? "nothing" : "'" + raw + "'") + ": expected the depot as longitude,latitude");
+        }
+        if (!polygon.covers(polygon.getFactory().createPoint(new org.locationtech.jts.geom.Coordinate(lon, lat)))) {
+            throw InputError.at(request.areasFile(), "feature " + place.id(), String.format(Locale.ROOT,
+                    "the depot %.6f,%.6f lies outside the area", lon, lat));
+        }
+        return new LonLat(lon, lat);
+    }
+
+    private static String folder(int index, Place place) {
+        return String.format(Locale.ROOT, "%03d-%s", index + 1, place.id().replaceAll("[^A-Za-z0-9_.-]", "_"));
+    }
+
+    private static void write(Path folder, Plan plan, String label) {
+        try {
+            Files.createDirectories(folder);
+        } catch (IOException e) {
+            throw InputError.at(folder, null, "cannot create: " + e.getMessage());
+        }
+        List<Tour> tours = plan.tours();
+        new TourGeoJsonWriter(false).write(folder.resolve("tour.geojson"), plan.network(), tours);
+        EdgeBearings bearings = EdgeBearings.of(plan.network());
+        List<List<org.streetcomb.tour.Direction>> sheets = new ArrayList<>();
+        for (Tour tour : tours) {
+            sheets.add(Directions.of(plan.network(), bearings, TrafficSide.RIGHT, tour));
+        }
+        DirectionSheetWriter.write(folder.resolve("directions.html"), sheets, "Tour");
+        new GpxTourWriter(new GpxLimits(1, GpxLimits.DEFAULT_TRACK_POINTS, GpxLimits.DEFAULT_ROUTE_POINTS, true))
+                .write(folder.resolve("tour.gpx"), plan.network(), plan.depot(), tours, sheets, "Tour");
+    }
+
+    private static void writeSummary(Path file, List<Row> rows) {
+        AtomicFile.write(file, out -> {
+            StringBuilder csv = new StringBuilder("area,id,name,status,service_km,deadhead_km,left_out_km,message\r\n");
+            for (Row r : rows) {
+                csv.append(String.format(Locale.ROOT, "%d,%s,%s,%s,%.3f,%.3f,%.3f,%s\r\n", r.index(), field(r.id()),
+                        field(r.label()), r.status(), r.serviceKm(), r.deadheadKm(), r.leftOutKm(), field(r.message())));
+            }
+            out.write(csv.toString().getBytes(StandardCharsets.UTF_8));
+        });
+    }
+
+    private static String field(String value) {
+        String safe = value.startsWith("=") || value.startsWith("+") || value.startsWith("-") || value.startsWith("@")
+                ? "'" + value : value;
+        return safe.contains(",") || safe.contains("\"") || safe.contains("\n")
+                ? "\"" + safe.replace("\"", "\"\"") + "\"" : safe;
+    }
+}

@@ -1,0 +1,96 @@
+package org.streetcomb.cli;
+
+import java.io.PrintWriter;
+import java.nio.file.Path;
+import java.util.List;
+import java.util.Locale;
+import java.util.concurrent.Callable;
+import org.streetcomb.ExitCode;
+import org.streetcomb.batch.DistrictBatch;
+import org.streetcomb.read.PlaceLayerReader;
+import picocli.CommandLine;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
+
+/** {@code streetcomb districts}: one plan per area of an area layer, all cores by default. */
+@Command(name = "districts",
+        mixinStandardHelpOptions = true,
+        sortOptions = false,
+        description = {
+            "Plans every area of an area layer on one road layer: each area's streets are serviced, the roads "
+                + "around it used to travel. Writes a folder per area (tour.geojson, tour.gpx, directions.html) and "
+                + "summary.csv; an area that cannot be planned is reported and the rest go on.",
+            "",
+            "Plans are advice: obey traffic law and signs, never handle a device while driving, and check the "
+                + "route against local rules and your own risk assessment; map data may be out of date."})
+public final class DistrictsCommand implements Callable<Integer> {
+
+    @Parameters(index = "0", paramLabel = "ROADS", description = "Road centrelines (any layer `plan` reads).")
+    Path roads;
+
+    @Parameters(index = "1", paramLabel = "AREAS", description = "Area polygons: GeoJSON, shapefile or GeoPackage.")
+    Path areas;
+
+    @Option(names = {"-o", "--out"}, paramLabel = "FOLDER", required = true,
+            description = "Folder for the per-area folders and summary.csv.")
+    Path out;
+
+    @Option(names = "--depot-field", paramLabel = "FIELD",
+            description = "Attribute of each area holding its depot as longitude,latitude (it must lie in the area). "
+                    + "Default: a node of the main network nearest the middle of the area.")
+    String depotField;
+
+    @Option(names = "--area-margin", paramLabel = "METRES", defaultValue = "1000",
+            description = "How far outside each area roads are kept to travel on (default: ${DEFAULT-VALUE} m).")
+    double margin;
+
+    @Option(names = "--area-crs", paramLabel = "CRS", description = "The area layer's CRS when it states none.")
+    String areaCrs;
+
+    @Option(names = "--area-table", paramLabel = "NAME", description = "The GeoPackage table holding the areas.")
+    String areaTable;
+
+    @Option(names = "--leave-out-cut-off",
+            description = "Leave out, and measure, streets one-way streets cut off, instead of failing the area.")
+    boolean leaveOutCutOff;
+
+    @Option(names = "--threads", paramLabel = "N",
+            description = "Areas planned at once (default: every core).")
+    Integer threads;
+
+    @Option(names = {"-q", "--quiet"}, description = "No progress lines on stderr.")
+    boolean quiet;
+
+    @CommandLine.Mixin
+    LayerOptions layer;
+
+    @CommandLine.Spec
+    CommandLine.Model.CommandSpec spec;
+
+    @Override
+    public Integer call() {
+        if (!(margin >= 0) || Double.isInfinite(margin)) {
+            throw new CommandLine.ParameterException(spec.commandLine(), "--area-margin must be 0 or more metres");
+        }
+        int cores = threads == null ? Runtime.getRuntime().availableProcessors() : threads;
+        if (cores < 1) {
+            throw new CommandLine.ParameterException(spec.commandLine(), "--threads must be 1 or more");
+        }
+        long start = System.nanoTime();
+        List<DistrictBatch.Row> rows = DistrictBatch.run(new DistrictBatch.Request(roads, layer.readOptions(), areas,
+                PlaceLayerReader.read(areas, areaCrs, areaTable), depotField, margin, leaveOutCutOff, out, cores),
+                quiet ? line -> { } : System.err::println);
+        PrintWriter stdout = spec.commandLine().getOut();
+        long failed = rows.stream().filter(r -> !r.status().equals("planned")).count();
+        double service = rows.stream().mapToDouble(DistrictBatch.Row::serviceKm).sum();
+        stdout.printf(Locale.ROOT, "Areas     %d planned, %d failed (listed in %s)%n", rows.size() - failed, failed,
+                out.resolve("summary.csv"));
+        stdout.printf(Locale.ROOT, "Service   %.3f km in all areas%n", service);
+        stdout.printf(Locale.ROOT, "Time      %.2f s on %d threads%n", (System.nanoTime() - start) / 1e9, cores);
+        stdout.println("Caution   Plans are advice: obey traffic law and signs, never handle a device while driving, "
+                + "follow local rules and your own risk assessment; map data may be out of date.");
+        stdout.flush();
+        return failed == 0 ? ExitCode.OK : ExitCode.NO_TOUR;
+    }
+}

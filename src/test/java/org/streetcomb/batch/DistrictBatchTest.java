@@ -1,0 +1,102 @@
+package org.streetcomb.batch;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.Arrays;
+import java.util.List;
+import java.util.stream.Stream;
+import net.sf.geographiclib.Geodesic;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+import org.locationtech.jts.geom.Coordinate;
+import org.locationtech.jts.geom.Geometry;
+import org.streetcomb.read.LayerReaders;
+import org.streetcomb.read.Place;
+import org.streetcomb.read.PlaceLayerReader;
+import org.streetcomb.read.ReadOptions;
+import org.streetcomb.read.RoadFeature;
+
+/**
+ * The batch over 20 invented districts tiling part of the Baltimore OpenStreetMap extract (fixtures/osm,
+ * ODbL): the districts' service plus what one-way streets cut off equals the length of the streets inside
+ * them as JTS's overlay clip gives it (an outside reference, lengths by GeographicLib); one and two threads
+ * write the same files; bad areas each get a line and the rest are planned.
+ */
+class DistrictBatchTest {
+
+    private static final Path ROADS = Path.of("fixtures/osm/baltimore.osm.pbf");
+    private static final Path DISTRICTS = Path.of("fixtures/areas/baltimore-districts.geojson");
+    private static final Path BAD = Path.of("fixtures/areas/baltimore-bad-areas.geojson");
+
+    private static List<DistrictBatch.Row> run(Path areas, Path out, int threads, String depotField) {
+        return DistrictBatch.run(new DistrictBatch.Request(ROADS, ReadOptions.DEFAULTS, areas,
+                PlaceLayerReader.read(areas, null, null), depotField, 1000, true, out, threads), line -> { });
+    }
+
+    @Test
+    void districtsServiceEveryStreetInsideThemOnceAndThreadsDoNotChangeTheFiles(@TempDir Path tmp) throws IOException {
+        List<DistrictBatch.Row> rows = run(DISTRICTS, tmp.resolve("one"), 1, null);
+        run(DISTRICTS, tmp.resolve("two"), 2, null);
+        assertEquals(20, rows.size());
+        // an area whose every street one-way streets cut off (a harbour-side district) is failed, never half-planned
+        rows.stream().filter(r -> !r.status().equals("planned"))
+                .forEach(r -> assertTrue(r.message().contains("one-way streets cut off"), r.message()));
+        assertTrue(rows.stream().filter(r -> r.status().equals("planned")).count() >= 18);
+        double planned = rows.stream().mapToDouble(r -> r.serviceKm() + r.leftOutKm()).sum() * 1000;
+        double clipped = 0;
+        List<RoadFeature> roads = LayerReaders.read(ROADS).features();
+        List<Place> areas = PlaceLayerReader.read(DISTRICTS, null, null);
+        for (int a = 0; a < areas.size(); a++) {
+            Place area = areas.get(a);
+            if (!rows.get(a).status().equals("planned")) {
+                continue;
+            }
+            for (RoadFeature f : roads) {
+                if (f.line().getEnvelopeInternal().intersects(area.geometry().getEnvelopeInternal())) {
+                    clipped += geodesic(f.line().intersection(area.geometry()));
+                }
+            }
+        }
+        // a street drawn exactly along a shared border is counted by the clip in both districts, by the batch once
+        assertEquals(clipped, planned, clipped * 2e-3, "districts' service = clipped street length");
+        assertEquals(files(tmp.resolve("one")), files(tmp.resolve("two")));
+        for (String name : files(tmp.resolve("one"))) {
+            assertTrue(Arrays.equals(Files.readAllBytes(tmp.resolve("one").resolve(name)),
+                    Files.readAllBytes(tmp.resolve("two").resolve(name))), name);
+        }
+    }
+
+    @Test
+    void badAreasGetALineEachAndTheRestArePlanned(@TempDir Path tmp) {
+        List<DistrictBatch.Row> rows = run(BAD, tmp, 2, "depot");
+        assertEquals(List.of(rows.get(0).status(), rows.get(1).status(), "failed", "failed", "failed", "failed", "failed"),
+                rows.stream().map(DistrictBatch.Row::status).toList(), rows.toString());
+        assertTrue(rows.get(2).message().contains("not a polygon"), rows.get(2).message());
+        assertTrue(rows.get(3).message().contains("no street to service"), rows.get(3).message());
+        assertTrue(rows.get(4).message().contains("no street to service"), rows.get(4).message());
+        assertTrue(rows.get(5).message().contains("outside the area"), rows.get(5).message());
+        assertTrue(rows.get(6).message().contains("not a valid polygon"), rows.get(6).message());
+    }
+
+    private static double geodesic(Geometry lines) {
+        double sum = 0;
+        for (int g = 0; g < lines.getNumGeometries(); g++) {
+            Geometry part = lines.getGeometryN(g);
+            Coordinate[] c = part.getCoordinates();
+            for (int k = 0; k + 1 < c.length && part.getDimension() == 1; k++) {
+                sum += Geodesic.WGS84.Inverse(c[k].y, c[k].x, c[k + 1].y, c[k + 1].x).s12;
+            }
+        }
+        return sum;
+    }
+
+    private static List<String> files(Path root) throws IOException {
+        try (Stream<Path> walk = Files.walk(root)) {
+            return walk.filter(Files::isRegularFile).map(p -> root.relativize(p).toString()).sorted().toList();
+        }
+    }
+}
