@@ -26,6 +26,7 @@ public final class PlanLayers {
     static final String ARROW_COLOUR = "#263238";
     static final String DEPOT_COLOUR = "#d7263d";
     static final String START_COLOUR = "#36454f";
+    static final String LEFT_OUT_COLOUR = "#e8590c";
     /** Above this many runs, step labels would hide the map and slow it: the step-number layer is left out. */
     static final int MAX_STEP_LABELS = 2000;
     /** Above this many arrows the layer starts switched off, so a large plan opens quickly. */
@@ -48,6 +49,41 @@ public final class PlanLayers {
         List<MapLayer> layers = new ArrayList<>();
         layers.add(NetworkLayer.of(plan.network()));
         layers.addAll(tourLayers(plan));
+        layers.addAll(scopeLayers(plan));
+        return layers;
+    }
+
+    /** The area's outline, and the streets asked for that one-way streets cut off, each a layer of its own. */
+    static List<MapLayer> scopeLayers(MappedTours plan) {
+        List<MapLayer> layers = new ArrayList<>();
+        if (plan.area() != null) {
+            List<MapFeature> outline = new ArrayList<>();
+            org.locationtech.jts.geom.Geometry rings = plan.area().polygon().getBoundary();
+            for (int g = 0; g < rings.getNumGeometries(); g++) {
+                org.locationtech.jts.geom.Coordinate[] c = rings.getGeometryN(g).getCoordinates();
+                double[] flat = new double[2 * c.length];
+                for (int i = 0; i < c.length; i++) {
+                    flat[2 * i] = c[i].x;
+                    flat[2 * i + 1] = c[i].y;
+                }
+                outline.add(new MapFeature(new double[][] {flat}, null, null, plan.area().label(), Map.of()));
+            }
+            layers.add(new MapLayer("area", "Service area", "streets inside are serviced, roads around it only travelled",
+                    MapLayer.Kind.LINES, new MapStyle(ARROW_COLOUR, 2, 0.8, "8 4"), true, outline));
+        }
+        if (plan.leftOut().length > 0) {
+            List<MapFeature> left = new ArrayList<>();
+            double metres = 0;
+            for (int e : plan.leftOut()) {
+                metres += plan.network().length(e);
+                left.add(new MapFeature(new double[][] {NetworkLayer.edgePoints(plan.network(), e, true)}, null, null,
+                        NetworkLayer.streetName(plan.network().feature(e)), Map.of("Feature",
+                        plan.network().feature(e).id(), "Length", String.format(Locale.ROOT, "%.0f m", plan.network().length(e)))));
+            }
+            layers.add(new MapLayer("left-out", String.format(Locale.ROOT, "Left out (%.2f km)", metres / 1000),
+                    "streets asked for that one-way streets cut off: not planned", MapLayer.Kind.LINES,
+                    MapStyle.solid(LEFT_OUT_COLOUR, 5, 0.9), true, left));
+        }
         return layers;
     }
 
