@@ -10,6 +10,7 @@ import java.io.PrintWriter;
 import java.io.StringWriter;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.List;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.streetcomb.ExitCode;
@@ -97,6 +98,26 @@ class FieldOutputOptionsTest {
         assertEquals(ExitCode.OK, Main.run(base, new PrintWriter(out), new PrintWriter(new StringWriter())));
         assertTrue(out.toString().contains("cannot cover the network within a 0.25 h shift"), out.toString());
         assertTrue(out.toString().contains("another vehicle's streets within 200 m"), out.toString());
+    }
+
+    /** Load options on bad input: one line naming the file, the feature and the field, exit 3, nothing written. */
+    @Test
+    void aDemandFieldThatIsNotANumberOrALanesFieldNoStreetHasIsRefused() {
+        Path gpx = folder.resolve("load.gpx");
+        for (String[] load : List.of(new String[] {"--demand-field", "name"}, new String[] {"--demand-per-km", "0.14",
+            "--lanes-field", "lanes"})) {
+            List<String> args = new java.util.ArrayList<>(List.of("plan", "fixtures/demo/brackenford.geojson",
+                    "--depot=-31.2,44.6", "--capacity", "6", "--gpx", gpx.toString()));
+            args.addAll(List.of(load));
+            StringWriter err = new StringWriter();
+            int code = Main.run(args.toArray(String[]::new), new PrintWriter(new StringWriter()), new PrintWriter(err));
+            assertEquals(ExitCode.BAD_INPUT, code, err.toString());
+            String message = err.toString().strip();
+            assertFalse(message.contains("\n") || message.contains("\tat "), message);
+            assertTrue(message.contains("brackenford.geojson") && message.contains(load[load.length - 2].equals("--lanes-field")
+                    ? "lanes" : "name"), message);
+            assertFalse(Files.exists(gpx));
+        }
     }
 
     private static JsonNode runJson(String[] base, String... more) throws Exception {
