@@ -19,7 +19,9 @@ import org.streetcomb.check.RepairOptions;
 import org.streetcomb.network.LonLat;
 import org.streetcomb.network.NetworkBuilder;
 import org.streetcomb.network.StreetNetwork;
+import org.streetcomb.plan.FieldFiles;
 import org.streetcomb.plan.Plan;
+import org.streetcomb.plan.PlanFiles;
 import org.streetcomb.plan.PlanRequest;
 import org.streetcomb.plan.Planner;
 import org.streetcomb.plan.ServiceOptions;
@@ -30,15 +32,8 @@ import org.streetcomb.read.RoadLayer;
 import org.streetcomb.scope.AreaChoice;
 import org.streetcomb.scope.ServiceArea;
 import org.streetcomb.timing.StageClock;
-import org.streetcomb.tour.Directions;
-import org.streetcomb.tour.EdgeBearings;
-import org.streetcomb.tour.TrafficSide;
-import org.streetcomb.tour.Tour;
 import org.streetcomb.write.AtomicFile;
-import org.streetcomb.write.DirectionSheetWriter;
 import org.streetcomb.write.GpxLimits;
-import org.streetcomb.write.GpxTourWriter;
-import org.streetcomb.write.TourGeoJsonWriter;
 
 /**
  * Plans every area of an area layer through the one planning pipeline ({@link Planner}): the road layer is
@@ -169,16 +164,9 @@ public final class DistrictBatch {
         } catch (IOException e) {
             throw InputError.at(folder, null, "cannot create: " + e.getMessage());
         }
-        List<Tour> tours = plan.tours();
-        new TourGeoJsonWriter(false).write(folder.resolve("tour.geojson"), plan.network(), tours);
-        EdgeBearings bearings = EdgeBearings.of(plan.network());
-        List<List<org.streetcomb.tour.Direction>> sheets = new ArrayList<>();
-        for (Tour tour : tours) {
-            sheets.add(Directions.of(plan.network(), bearings, TrafficSide.RIGHT, tour));
-        }
-        DirectionSheetWriter.write(folder.resolve("directions.html"), sheets, "Tour");
-        new GpxTourWriter(new GpxLimits(1, GpxLimits.DEFAULT_TRACK_POINTS, GpxLimits.DEFAULT_ROUTE_POINTS, true))
-                .write(folder.resolve("tour.gpx"), plan.network(), plan.depot(), tours, sheets, "Tour");
+        PlanFiles.write(plan, new FieldFiles(folder.resolve("tour.geojson"), false, folder.resolve("tour.gpx"),
+                new GpxLimits(1, GpxLimits.DEFAULT_TRACK_POINTS, GpxLimits.DEFAULT_ROUTE_POINTS, true), null,
+                folder.resolve("directions.html")), new StageClock(StageClock.SILENT));
     }
 
     private static void writeSummary(Path file, List<Row> rows) {

@@ -11,14 +11,11 @@ import org.streetcomb.plan.AuditRequest;
 import org.streetcomb.write.CoverageGeoJsonWriter;
 import org.streetcomb.plan.DriveAudit;
 import org.streetcomb.match.MatchSettings;
-import org.streetcomb.mopup.MopUpPlanner;
-import org.streetcomb.network.Components;
-import org.streetcomb.network.DepotPlacement;
 import org.streetcomb.network.LonLat;
-import org.streetcomb.network.NearestNode;
-import org.streetcomb.network.StreetNetwork;
+import org.streetcomb.plan.MopUpPlanning;
+import org.streetcomb.plan.MopUpRequest;
 import org.streetcomb.plan.Plan;
-import org.streetcomb.plan.PlanRequest;
+import org.streetcomb.plan.PlanFiles;
 import org.streetcomb.plan.PlanScope;
 import org.streetcomb.plan.ServiceOptions;
 import org.streetcomb.solve.KerbMode;
@@ -28,7 +25,6 @@ import org.streetcomb.report.MapGroup;
 import org.streetcomb.report.MapLayer;
 import org.streetcomb.report.PlanLayers;
 import org.streetcomb.report.TrackLines;
-import org.streetcomb.write.TourGeoJsonWriter;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
@@ -68,20 +64,8 @@ public final class AuditCommand implements Callable<Integer> {
     @Option(names = "--both-kerbs", description = "Each two-way street must be driven once in each direction.")
     boolean bothKerbs;
 
-    @Option(names = "--depot-part-only",
-            description = "As plan --depot-part-only: the plan covered only the network part that holds the depot; "
-                    + "streets on other parts are reported as left out of the plan, not missed.")
-    boolean depotOnly;
-
-    @Option(names = "--leave-out-cut-off",
-            description = "As plan --leave-out-cut-off: streets that one-way streets cut off from the depot are "
-                    + "reported as left out of the plan, not missed, and the mop-up leaves them out too.")
-    boolean leaveOutCutOff;
-
-    @Option(names = "--service-ids", paramLabel = "FILE",
-            description = "As plan --service-ids: only the streets listed in FILE were asked for; others are "
-                    + "reported as left out of the plan.")
-    Path serviceIds;
+    @CommandLine.Mixin
+    ScopeOptions scope;
 
     @Option(names = "--streets-out", paramLabel = "FILE", description = "Write every street with its coverage status and share as GeoJSON.")
     Path streetsOut;
@@ -103,18 +87,13 @@ public final class AuditCommand implements Callable<Integer> {
             description = "Write the ids of the streets not covered, one per line, for plan --service-ids.")
     Path mopUpIds;
 
-    @Option(names = "--depot", paramLabel = "LON,LAT", converter = LonLatConverter.class,
-            description = "Where the mop-up tour ends (and starts, without --start), as longitude,latitude. "
-                    + "Default: as planning does, a node of the largest strongly connected set of streets.")
-    LonLat depot;
+    @CommandLine.Mixin
+    DepotOptions depot;
 
     @Option(names = "--start", paramLabel = "LON,LAT", converter = LonLatConverter.class,
-            description = "Where the crew is now: the mop-up tour starts here and ends at the depot.")
+            description = "Where the crew is now: the mop-up tour starts here and ends at the depot (within --depot-reach "
+                    + "of a street node).")
     LonLat start;
-
-    @Option(names = "--depot-reach", paramLabel = "METRES", defaultValue = "500",
-            description = "Refuse a depot or start farther than this from the nearest street node (default: ${DEFAULT-VALUE} m).")
-    double depotReach;
 
     @Option(names = "--gps-sigma", paramLabel = "METRES", defaultValue = "10",
             description = "GPS position noise, one standard deviation (default: ${DEFAULT-VALUE} m).")
@@ -187,9 +166,7 @@ public final class AuditCommand implements Callable<Integer> {
         if (!(doubtOdds >= 1) || !Double.isFinite(doubtOdds)) {
             throw new CommandLine.ParameterException(spec.commandLine(), "--doubt-odds must be 1 or more");
         }
-        if (!(depotReach >= 0)) {
-            throw new CommandLine.ParameterException(spec.commandLine(), "--depot-reach must be 0 or more metres");
-        }
+        depot.check(spec.commandLine());
         field.check(spec.commandLine());
         report.validate();
         if (start != null && field.tripOptions.requested()) {
@@ -244,38 +221,27 @@ public final class AuditCommand implements Callable<Integer> {
 
     /** What the plan asked for, when any of the plan's scope options is given; null audits every required street. */
     private PlanScope scope() {
-        if (!depotOnly && !leaveOutCutOff && serviceIds == null) {
+        if (!scope.narrowed()) {
             return null;
         }
-        return new PlanScope(depot, depotReach, depotOnly, new ServiceOptions(
-                bothKerbs ? KerbMode.BOTH_KERBS : KerbMode.ONE_PASS, serviceIds, null, leaveOutCutOff));
+        return new PlanScope(depot.position, depot.reach, scope.depotOnly, new ServiceOptions(
+                bothKerbs ? KerbMode.BOTH_KERBS : KerbMode.ONE_PASS, scope.serviceIds, null, scope.leaveOutCutOff));
     }
 
     private boolean mopUpRequested() {
-        return mopUpOut != null || field.gpx != null || field.kml != null || field.directions != null;
+        return mopUpOut != null || field.anyFile();
     }
 
     /** Plans the mop-up tour and writes it; returns its part of the summary. */
     private PlanSummary.Section mopUp(Audit audit, StageClock clock) {
-        StreetNetwork audited = audit.coverage().network();
-        NearestNode.Hit depotHit = DepotPlacement.place(audited, audited.features(), depot, depotReach, layerFile);
-        int first = start == null ? depotHit.node()
-                : DepotPlacement.place(audited, audited.features(), start, depotReach, layerFile).node();
-        MopUpPlanner.MopUp planned = clock.time("mop-up", () ->
-                MopUpPlanner.plan(audit.coverage(), depotHit.node(), first, turnBack,
-                        layerFile.getFileName().toString()));
+        MopUpPlanning.Result planned = MopUpPlanning.plan(audit,
+                new MopUpRequest(depot.position, start, depot.reach, turnBack, field.arrangement()), clock);
         if (planned == null) {
             return MopUpSection.nothing();
         }
-        StreetNetwork network = planned.network();
-        Plan plan = field.arrange(new Plan(new PlanRequest(layerFile, depot, layer.snap(), depotReach, false,
-                layer.readOptions()), audit.read(), network, Components.of(network), depotHit.node(),
-                depot == null ? 0 : depotHit.distance(), planned.augmentation(), planned.tours(), List.of()), clock);
-        mopUpPlan = plan;
-        if (mopUpOut != null) {
-            clock.run("write mop-up", () -> new TourGeoJsonWriter(true).write(mopUpOut, network, plan.tours()));
-        }
-        return MopUpSection.of(plan, planned, field.write(plan, clock), mopUpOut);
+        mopUpPlan = planned.plan();
+        PlanFiles.Written written = PlanFiles.write(mopUpPlan, field.files(mopUpOut, true), clock, "write mop-up");
+        return MopUpSection.of(mopUpPlan, planned.planned(), field.section(mopUpPlan, written), mopUpOut);
     }
 
     private void positive(double value, String option) {

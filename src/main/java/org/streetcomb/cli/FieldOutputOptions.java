@@ -7,27 +7,23 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
+import org.streetcomb.plan.Arranged;
+import org.streetcomb.plan.Arrangement;
+import org.streetcomb.plan.FieldFiles;
 import org.streetcomb.plan.Plan;
-import org.streetcomb.timing.StageClock;
-import org.streetcomb.tour.Direction;
-import org.streetcomb.tour.Directions;
-import org.streetcomb.tour.EdgeBearings;
-import org.streetcomb.tour.Tour;
+import org.streetcomb.plan.PlanFiles;
 import org.streetcomb.tour.TrafficSide;
-import org.streetcomb.tour.TurnAwareOrder;
 import org.streetcomb.tour.TurnCounts;
-import org.streetcomb.trip.Trip;
-import org.streetcomb.fleet.Fleet;
 import org.streetcomb.write.DirectionSheetWriter;
 import org.streetcomb.write.GpxLimits;
 import org.streetcomb.write.GpxTourWriter;
-import org.streetcomb.write.KmlTourWriter;
 import picocli.CommandLine;
 import picocli.CommandLine.Option;
 
 /**
  * The plan options for taking tours to the field: the turn-aware order, GPX and KML files, a direction
- * sheet, and the side of the road traffic keeps to. A picocli mixin, so {@code plan} only wires it in.
+ * sheet, and the side of the road traffic keeps to. A picocli mixin: it turns options into an
+ * {@link Arrangement} and {@link FieldFiles} for the planner, and formats what was planned and written.
  */
 public final class FieldOutputOptions {
 
@@ -72,10 +68,6 @@ public final class FieldOutputOptions {
     @CommandLine.Mixin
     TripOptions tripOptions;
 
-    private EdgeBearings bearings;
-    private TurnCounts plainCounts;
-    private Fleet trips;
-
     /** Checks the option values; call before planning so a bad value fails fast. */
     void check(CommandLine commandLine) {
         if (!(simplify >= 0) || simplify > 1000) {
@@ -91,62 +83,31 @@ public final class FieldOutputOptions {
         }
     }
 
-    /**
-     * Cuts the plan's tour into trips when asked, then reorders the tours (or trips) for fewer U-turns and
-     * crossing turns, unless asked to keep them as found.
-     */
-    Plan arrange(Plan solved, StageClock clock) {
-        Plan plan;
-        if (tripOptions.requested()) {
-            trips = clock.time("trips", () -> tripOptions.cut(solved));
-            plan = solved.withTours(trips.trips().stream().map(Trip::tour).toList());
-        } else {
-            plan = solved;
-        }
-        return clock.time("turns", () -> {
-            bearings = EdgeBearings.of(plan.network());
-            plainCounts = counts(plan, plan.tours());
-            if (plainOrder) {
-                return plan;
-            }
-            List<Tour> reordered = new ArrayList<>();
-            for (Tour tour : plan.tours()) {
-                reordered.add(TurnAwareOrder.of(plan.network(), bearings, side, tour));
-            }
-            return plan.withTours(reordered);
-        });
+    /** How the planner should cut and order the tours, from these options. */
+    Arrangement arrangement() {
+        return new Arrangement(side, !plainOrder, tripOptions.request());
     }
 
-    private TurnCounts counts(Plan plan, List<Tour> tours) {
-        TurnCounts counts = TurnCounts.none();
-        for (Tour tour : tours) {
-            counts = counts.plus(TurnCounts.of(plan.network(), bearings, side, tour));
-        }
-        return counts;
+    /** The files to write, with the tours' GeoJSON at {@code tours} (null for none). */
+    FieldFiles files(Path tours, boolean steps) {
+        return new FieldFiles(tours, steps, gpx, new GpxLimits(simplify, trackPoints, routePoints, routes), kml,
+                directions);
     }
 
-    /**
-     * Writes the requested files for a plan from {@link #arrange}; returns what was written and the turn
-     * counts, for the summary.
-     */
-    PlanSummary.Section write(Plan plan, StageClock clock) {
-        List<Tour> tours = plan.tours();
-        List<List<Direction>> sheets = new ArrayList<>();
-        for (Tour tour : tours) {
-            sheets.add(Directions.of(plan.network(), bearings, side, tour));
-        }
-        TurnCounts counts = counts(plan, tours);
-        String label = trips == null ? "Tour" : "Trip";
+    /** Whether any file for the field was asked for. */
+    boolean anyFile() {
+        return gpx != null || kml != null || directions != null;
+    }
+
+    /** The summary's account of the arranged plan (trips, turns) and of the files written. */
+    PlanSummary.Section section(Plan plan, PlanFiles.Written written) {
+        Arranged arranged = plan.arranged();
+        TurnCounts counts = arranged.asDriven();
+        TurnCounts plainCounts = arranged.asFound();
         List<String[]> text = new ArrayList<>();
         ObjectNode json = JsonNodeFactory.instance.objectNode();
-        if (trips != null) {
-            List<Trip> ordered = new ArrayList<>();
-            List<Trip> cut = trips.trips();
-            for (int t = 0; t < tours.size(); t++) {
-                ordered.add(new Trip(tours.get(t), cut.get(t).length(), cut.get(t).service(), cut.get(t).demand(),
-                        cut.get(t).overLimit()));
-            }
-            tripOptions.report(trips, ordered, plan.network(), plan.depot(), json, text);
+        if (arranged.fleet() != null) {
+            tripOptions.report(arranged.fleet(), arranged.trips(), plan.network(), plan.depot(), json, text);
         }
         ObjectNode turns = json.putObject("turns");
         turns.put("traffic_side", side.name().toLowerCase(Locale.ROOT));
@@ -175,85 +136,41 @@ public final class FieldOutputOptions {
                     "reordered for fewer turns from %d U-turns, %d crossing turns, %d straight on; same length",
                     plainCounts.uTurns(), plainCounts.crossingTurns(), plainCounts.straightOns())});
         }
-        List<int[]> groups = groups(tours.size());
         if (gpx != null) {
             ArrayNode files = json.putArray("gpx_files");
-            for (int g = 0; g < groups.size(); g++) {
-                int[] range = groups.get(g);
-                if (range[0] == range[1]) {
-                    continue;
-                }
-                Path file = groups.size() == 1 ? gpx : perVehicle(gpx, g + 1);
-                GpxTourWriter.Written written = clock.time("gpx", () -> new GpxTourWriter(
-                        new GpxLimits(simplify, trackPoints, routePoints, routes))
-                        .write(file, plan.network(), plan.depot(), tours.subList(range[0], range[1]),
-                                sheets.subList(range[0], range[1]), label));
+            for (PlanFiles.GpxFile file : written.gpx()) {
+                GpxTourWriter.Written counted = file.counts();
                 ObjectNode node = files.addObject();
                 if (!json.has("gpx")) {
                     json.set("gpx", node);
                 }
-                node.put("file", file.toString());
-                node.put("tracks", written.tracks());
-                node.put("track_points", written.trackPoints());
-                node.put("routes", written.routes());
-                node.put("route_points", written.routePoints());
-                node.put("waypoints", written.waypoints());
+                node.put("file", file.file().toString());
+                node.put("tracks", counted.tracks());
+                node.put("track_points", counted.trackPoints());
+                node.put("routes", counted.routes());
+                node.put("route_points", counted.routePoints());
+                node.put("waypoints", counted.waypoints());
                 text.add(new String[] {"GPX", String.format(Locale.ROOT, "%s: %d track(s) with %d points%s, %d waypoint(s)",
-                        file, written.tracks(), written.trackPoints(), routes ? String.format(Locale.ROOT,
-                        ", %d route(s) with %d points", written.routes(), written.routePoints()) : "", written.waypoints())});
+                        file.file(), counted.tracks(), counted.trackPoints(), routes ? String.format(Locale.ROOT,
+                        ", %d route(s) with %d points", counted.routes(), counted.routePoints()) : "",
+                        counted.waypoints())});
             }
         }
         if (kml != null) {
-            clock.run("kml", () -> new KmlTourWriter(simplify).write(kml, plan.network(), plan.depot(), tours, label));
             json.put("kml", kml.toString());
             text.add(new String[] {"KML", kml.toString()});
         }
         if (directions != null) {
             ArrayNode files = json.putArray("directions_files");
-            for (int g = 0; g < groups.size(); g++) {
-                int[] range = groups.get(g);
-                if (range[0] == range[1]) {
-                    continue;
-                }
-                Path file = groups.size() == 1 ? directions : perVehicle(directions, g + 1);
-                List<List<Direction>> mine = sheets.subList(range[0], range[1]);
-                clock.run("directions", () -> DirectionSheetWriter.write(file, mine, label));
+            for (PlanFiles.SheetFile file : written.sheets()) {
                 if (!json.has("directions")) {
-                    json.put("directions", file.toString());
+                    json.put("directions", file.file().toString());
                 }
-                files.add(file.toString());
-                int lines = mine.stream().mapToInt(List::size).sum();
-                text.add(new String[] {"Sheet", String.format(Locale.ROOT, "%s: %d lines", file, lines)});
+                files.add(file.file().toString());
+                text.add(new String[] {"Sheet", String.format(Locale.ROOT, "%s: %d lines", file.file(), file.lines())});
             }
         }
         return new PlanSummary.Section("field", json, text);
-    }
-
-    /**
-     * The tours written to one file each: every vehicle's trips when a fleet of several vehicles was planned,
-     * else all tours together; as {from, to} index ranges into the tours.
-     */
-    private List<int[]> groups(int tours) {
-        List<int[]> groups = new ArrayList<>();
-        if (trips == null || trips.vehicles().size() == 1) {
-            groups.add(new int[] {0, tours});
-            return groups;
-        }
-        int from = 0;
-        for (var day : trips.vehicles()) {
-            groups.add(new int[] {from, from + day.trips().size()});
-            from += day.trips().size();
-        }
-        return groups;
-    }
-
-    /** {@code name.ext} becomes {@code name-vehicle-N.ext}: one file per vehicle. */
-    static Path perVehicle(Path file, int vehicle) {
-        String name = file.getFileName().toString();
-        int dot = name.lastIndexOf('.');
-        String renamed = dot > 0 ? name.substring(0, dot) + "-vehicle-" + vehicle + name.substring(dot)
-                : name + "-vehicle-" + vehicle;
-        return file.resolveSibling(renamed);
     }
 
     private static double round(double value) {

@@ -81,6 +81,7 @@ public final class HealthCommand implements Callable<Integer> {
                         "--near-miss, --stub and --duplicate-within must be between 0 and 1000 metres");
             }
         }
+        depot.check(spec.commandLine());
         map.validate();
         CheckOptions options = new CheckOptions(snap, nearMiss, stub, duplicate);
         StageClock clock = new StageClock(TerminalProgress.forCommandLine(quiet, System.err));

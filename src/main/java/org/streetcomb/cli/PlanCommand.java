@@ -6,11 +6,11 @@ import java.util.concurrent.Callable;
 import org.streetcomb.ExitCode;
 import org.streetcomb.network.LonLat;
 import org.streetcomb.plan.Plan;
+import org.streetcomb.plan.PlanFiles;
 import org.streetcomb.plan.PlanRequest;
 import org.streetcomb.plan.Planner;
 import org.streetcomb.timing.StageClock;
 import org.streetcomb.report.PlanLayers;
-import org.streetcomb.write.TourGeoJsonWriter;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
@@ -31,26 +31,14 @@ public final class PlanCommand implements Callable<Integer> {
     @Parameters(index = "0", paramLabel = "LAYER", description = "Road centrelines: GeoJSON (.geojson, .json), a shapefile (.shp, or a .zip holding one) or OpenStreetMap (.osm, .osm.gz, .osm.bz2, .osm.pbf).")
     Path input;
 
-    @Option(names = "--depot", paramLabel = "LON,LAT", converter = LonLatConverter.class,
-            description = "Where tours start and end, as longitude,latitude in degrees (WGS84). "
-                    + "Default: the node nearest the layer's first point among the largest set of streets that can "
-                    + "all reach each other.")
-    LonLat depot;
+    @CommandLine.Mixin
+    DepotOptions depot;
 
     @Option(names = {"-o", "--out"}, paramLabel = "FILE", description = "Write the tours as a GeoJSON FeatureCollection.")
     Path out;
 
     @Option(names = "--steps", description = "Also write one GeoJSON feature per step of each tour.")
     boolean steps;
-
-    @Option(names = "--depot-reach", paramLabel = "METRES", defaultValue = "500",
-            description = "Refuse a depot farther than this from the nearest street node (default: ${DEFAULT-VALUE} m).")
-    double depotReach;
-
-    @Option(names = "--depot-part-only",
-            description = "When the network falls apart into separate parts, plan only the part that holds the depot. "
-                    + "Default: one tour per part.")
-    boolean depotOnly;
 
     @Option(names = "--json", description = "Print the summary as JSON instead of text.")
     boolean json;
@@ -82,20 +70,16 @@ public final class PlanCommand implements Callable<Integer> {
     @Override
     public Integer call() {
         double snap = layer.snap();
-        if (!(depotReach >= 0)) {
-            throw new CommandLine.ParameterException(spec.commandLine(), "--depot-reach must be 0 or more metres");
-        }
+        depot.check(spec.commandLine());
         field.check(spec.commandLine());
         report.validate();
         PrintWriter stdout = spec.commandLine().getOut();
         StageClock clock = new StageClock(TerminalProgress.forCommandLine(quiet, System.err));
-        field.tripOptions.progress = quiet ? null : System.err::println;
-        Plan plan = field.arrange(Planner.plan(new PlanRequest(input, depot, snap, depotReach, depotOnly, layer.readOptions(),
-                service.options(spec.commandLine()).withArea(area.area(spec.commandLine()))), repair.options(), clock), clock);
-        if (out != null) {
-            clock.run("write", () -> new TourGeoJsonWriter(steps).write(out, plan.network(), plan.tours()));
-        }
-        PlanSummary.Section fieldSection = field.write(plan, clock);
+        Plan plan = Planner.plan(new PlanRequest(input, depot.position, snap, depot.reach, service.scope.depotOnly, layer.readOptions(),
+                service.options(spec.commandLine()).withArea(area.area(spec.commandLine())), field.arrangement()),
+                repair.options(), clock);
+        PlanFiles.Written written = PlanFiles.write(plan, field.files(out, steps), clock);
+        PlanSummary.Section fieldSection = field.section(plan, written);
         PlanSummary summary = PlanSummary.of(plan, clock.stages(), out);
         summary.add(fieldSection);
         if (report.requested()) {

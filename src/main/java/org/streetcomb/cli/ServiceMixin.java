@@ -1,13 +1,12 @@
 package org.streetcomb.cli;
 
-import java.nio.file.Path;
 import org.streetcomb.network.LonLat;
 import org.streetcomb.plan.ServiceOptions;
 import org.streetcomb.solve.KerbMode;
 import picocli.CommandLine;
 import picocli.CommandLine.Option;
 
-/** Options saying which streets need which passes and where the route ends. */
+/** Options saying which streets need which passes (with the {@link ScopeOptions}) and where the route ends. */
 public final class ServiceMixin {
 
     @Option(names = "--both-kerbs",
@@ -19,20 +18,13 @@ public final class ServiceMixin {
             description = "With --both-kerbs: service each one-way street twice along it, once per kerb.")
     boolean oneWayTwice;
 
-    @Option(names = "--service-ids", paramLabel = "FILE",
-            description = "Service only the streets whose feature ids are listed in FILE (one per line, # starts a "
-                    + "comment); other streets are used only to travel between them.")
-    Path serviceIds;
-
     @Option(names = "--end", paramLabel = "LON,LAT", converter = LonLatConverter.class,
             description = "End the depot's tour at the street node nearest this point instead of returning to the "
                     + "depot (an open route).")
     LonLat end;
 
-    @Option(names = "--leave-out-cut-off",
-            description = "Leave out, with a warning that names them, streets that one-way streets cut off from the "
-                    + "depot (typical at the edge of an extract); by default the plan is refused.")
-    boolean leaveOutCutOff;
+    @CommandLine.Mixin
+    ScopeOptions scope;
 
     @Option(names = "--prove", paramLabel = "SECONDS",
             description = "After planning, spend at most SECONDS seeking a proof that the tour is the shortest "
@@ -50,6 +42,6 @@ public final class ServiceMixin {
         }
         KerbMode kerbs = !bothKerbs ? KerbMode.ONE_PASS
                 : oneWayTwice ? KerbMode.BOTH_KERBS_ONE_WAY_TWICE : KerbMode.BOTH_KERBS;
-        return new ServiceOptions(kerbs, serviceIds, end, leaveOutCutOff, proveSeconds);
+        return new ServiceOptions(kerbs, scope.serviceIds, end, scope.leaveOutCutOff, proveSeconds);
     }
 }

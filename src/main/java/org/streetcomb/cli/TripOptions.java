@@ -7,18 +7,12 @@ import java.math.RoundingMode;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
-import org.streetcomb.InputError;
-import org.streetcomb.plan.Plan;
 import org.streetcomb.trip.Trip;
-import org.streetcomb.trip.TripLimit;
 import org.streetcomb.trip.TripPlanner;
 import org.streetcomb.fleet.Fleet;
-import org.streetcomb.fleet.FleetPlanner;
-import org.streetcomb.fleet.FleetSettings;
+import org.streetcomb.plan.FleetRequest;
 import org.streetcomb.fleet.ServiceOverlap;
-import org.streetcomb.fleet.StreetDemand;
 import org.streetcomb.network.LonLat;
-import org.streetcomb.network.NearestNode;
 import org.streetcomb.network.StreetNetwork;
 import org.streetcomb.fleet.VehicleDay;
 import picocli.CommandLine;
@@ -83,15 +77,8 @@ public final class TripOptions {
                     + " for a vehicle's " + TripPlanner.LARGE_TASKS + " streets or fewer, 0 beyond).")
     Integer restarts;
 
-    /** Where the trip search's progress goes when more effort is asked for, or null for nowhere. */
-    java.util.function.Consumer<String> progress;
-
-    /** How far a reload point may lie from the nearest street node (as the depot's default reach). */
-    static final double RELOAD_REACH_METRES = 500;
-
     boolean requested() {
-        return maxKm != null || maxHours != null || vehicles != null || shiftHours != null || capacity != null
-                || !reloadAt.isEmpty();
+        return request().requested();
     }
 
     void check(CommandLine commandLine) {
@@ -127,43 +114,11 @@ public final class TripOptions {
         }
     }
 
-    /** The fleet's day planned over the plan's single tour from the depot. */
-    Fleet cut(Plan plan) {
-        if (plan.tours().size() != 1 || plan.tours().get(0).start() != plan.depot()) {
-            throw new InputError(plan.request().input() + ": trips must start at the depot, but the network has "
-                    + plan.components().count() + " separate parts: add --depot-part-only to cut the depot's part "
-                    + "into trips");
-        }
-        TripLimit limit = maxKm != null ? TripLimit.length(maxKm * 1000)
-                : maxHours != null ? TripLimit.hours(maxHours, serviceSpeed, travelSpeed)
-                : capacity != null ? TripLimit.capacity(capacity)
-                : TripLimit.length(Double.POSITIVE_INFINITY);
-        if (capacity != null && (maxKm != null || maxHours != null)) {
-            limit = limit.withCapacity(capacity);
-        }
-        double[] demand = capacity == null ? null : StreetDemand.of(plan.network(), demandField,
-                demandPerKm == null ? 0 : demandPerKm, lanesField, plan.request().input());
-        List<Integer> reloads = new ArrayList<>();
-        int part = plan.components().of(plan.depot());
-        for (LonLat at : reloadAt) {
-            NearestNode.Hit hit = NearestNode.of(plan.network(), at.lon(), at.lat(),
-                    node -> plan.components().of(node) == part);
-            if (hit.node() < 0 || hit.distance() > RELOAD_REACH_METRES) {
-                throw new InputError(String.format(Locale.ROOT, "--reload-at %s,%s: no street node of the depot's part "
-                        + "within %.0f m; give a place on the network", at.lon(), at.lat(), RELOAD_REACH_METRES));
-            }
-            reloads.add(hit.node());
-        }
-        FleetSettings settings = new FleetSettings(vehicles == null ? 1 : vehicles, limit,
-                shiftHours == null ? Double.POSITIVE_INFINITY : shiftHours, serviceSpeed, travelSpeed,
-                restarts == null ? TripPlanner.AUTO : restarts, 1, reloads);
-        FleetPlanner planner = new FleetPlanner(plan.network(), plan.depot(), settings);
-        if (progress != null && restarts != null && restarts > 0) {
-            planner.withProgress(progress);
-        }
-        return planner.plan(plan.tours().get(0), demand);
+    /** The fleet and trip limits asked for. */
+    FleetRequest request() {
+        return new FleetRequest(maxKm, maxHours, vehicles, shiftHours, capacity, demandField, demandPerKm, lanesField,
+                reloadAt, serviceSpeed, travelSpeed, restarts);
     }
-
 
     private static int services(Trip trip) {
         int n = 0;

@@ -22,10 +22,18 @@ import org.streetcomb.tour.Tour;
  * @param tours         the tours, depot's component first
  * @param warnings      things the user should know about this plan, one line each
  * @param leftOut       edges asked for but left out because one-way streets cut them off, in id order
+ * @param arranged      how the tours were cut into trips and ordered for driving, or null before that stage
  */
 public record Plan(PlanRequest request, ReadReport read, StreetNetwork network, Components components, int depot,
-                   double depotDistance, Augmentation augmentation, List<Tour> tours, List<String> warnings, int[] leftOut)
+                   double depotDistance, Augmentation augmentation, List<Tour> tours, List<String> warnings, int[] leftOut,
+                   Arranged arranged)
         implements MappedTours {
+
+    public Plan(PlanRequest request, ReadReport read, StreetNetwork network, Components components, int depot,
+                double depotDistance, Augmentation augmentation, List<Tour> tours, List<String> warnings,
+                int[] leftOut) {
+        this(request, read, network, components, depot, depotDistance, augmentation, tours, warnings, leftOut, null);
+    }
 
     public Plan(PlanRequest request, ReadReport read, StreetNetwork network, Components components, int depot,
                 double depotDistance, Augmentation augmentation, List<Tour> tours, List<String> warnings) {
@@ -40,7 +48,18 @@ public record Plan(PlanRequest request, ReadReport read, StreetNetwork network, 
     /** The same plan with its tours replaced (reordered, or cut into trips). */
     public Plan withTours(List<Tour> replaced) {
         return new Plan(request, read, network, components, depot, depotDistance, augmentation, List.copyOf(replaced),
-                warnings, leftOut);
+                warnings, leftOut, arranged);
+    }
+
+    /** The same plan with its tours arranged for driving. */
+    Plan arranged(List<Tour> driven, Arranged how) {
+        return new Plan(request, read, network, components, depot, depotDistance, augmentation, List.copyOf(driven),
+                warnings, leftOut, how);
+    }
+
+    /** Whether the tours are trips of a fleet (then written and labelled as trips). */
+    public boolean hasTrips() {
+        return arranged != null && arranged.fleet() != null;
     }
 
     /** Total length of the streets the tours cover, metres. */

@@ -15,9 +15,15 @@ import org.streetcomb.read.ReadOptions;
  * @param depotOnly         plan only the connected component that holds the depot
  * @param readOptions       how to read the layer
  * @param service           which streets need which passes, and where the depot's tour ends
+ * @param arrangement       how the solved tours are cut into trips and ordered for driving
  */
 public record PlanRequest(Path input, LonLat depot, double snapTolerance, double maxDepotDistance,
-                          boolean depotOnly, ReadOptions readOptions, ServiceOptions service) {
+                          boolean depotOnly, ReadOptions readOptions, ServiceOptions service, Arrangement arrangement) {
+
+    public PlanRequest(Path input, LonLat depot, double snapTolerance, double maxDepotDistance, boolean depotOnly,
+                       ReadOptions readOptions, ServiceOptions service) {
+        this(input, depot, snapTolerance, maxDepotDistance, depotOnly, readOptions, service, Arrangement.DEFAULT);
+    }
 
     public PlanRequest(Path input, LonLat depot, double snapTolerance, double maxDepotDistance, boolean depotOnly,
                        ReadOptions readOptions) {

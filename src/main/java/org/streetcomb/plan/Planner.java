@@ -28,7 +28,11 @@ import org.streetcomb.solve.ReachabilityCheck;
 import org.streetcomb.tour.Tour;
 import org.streetcomb.tour.TourPlanner;
 
-/** Runs the stages of a plan in order: read, build the network, place the depot, solve, order the tours. */
+/**
+ * The planning pipeline: read, build the network, repair, scope to the service area, place the depot, solve,
+ * order the tours, cut them into a fleet's trips and reorder them for fewer turns. The command line, the
+ * districts batch and the audit's mop-up all plan through here, so a Java caller gets the command line's tours.
+ */
 public final class Planner {
 
     private Planner() {
@@ -99,9 +103,10 @@ public final class Planner {
             warnings.add("the depot's tour is empty: nothing it can reach and leave again needs servicing; give a "
                     + "--depot on the main network (the health command lists one-way traps)");
         }
-        return new Plan(request, layer.report(), network, components, depot.node(),
+        Plan solved = new Plan(request, layer.report(), network, components, depot.node(),
                 request.depot() != null ? depot.distance() : 0, augmentation, tours, List.copyOf(warnings),
                 leftOut(asked, problem));
+        return TourArrangement.apply(solved, request.arrangement(), clock);
     }
 
     /** The edges the asked problem needs and the solved one does not: those one-way streets cut off. */
