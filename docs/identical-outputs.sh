@@ -7,10 +7,10 @@
 #   diff before.txt after.txt
 #
 # plan: trips (--max-trip-km), real layers with --leave-out-cut-off (one-way data cuts some streets off)
-# and --depot-part-only (trips start at the depot),, GeoJSON, GPX, direction sheet, HTML report, --json summary.
-# audit: on the real layers one-way tags ignored (--oneway-field of no field; walking for OSM), since audit
-# has no --leave-out-cut-off and a mop-up into a cut-off street has no tour; a drive made from every other trip of that plan (its GPX track points, one fix every 2 s), with
-# the mop-up tour (GeoJSON, GPX, sheet), the street and missed layers, report and --json summary.
+# and --depot-part-only (trips start at the depot), GeoJSON, GPX, direction sheet, HTML report, --json summary.
+# audit, with the same options: a drive made from every other trip of that plan (its GPX track points, one
+# fix every 2 s), with the mop-up tour (GeoJSON, GPX, sheet), the street and missed layers, report and --json
+# summary. Monaco is run twice: walking (undirected) and driving with its one-way streets (mixed).
 # Real layers are read from ../shared/realdata (REALDATA to override); outputs go to a scratch folder that
 # has the same path on every run, since summaries name their files.
 set -eu
@@ -68,15 +68,15 @@ PY
 }
 
 one() {
-  # NAME LAYER TRIP_KM PLAN_ONLY_OPTIONS AUDIT_ONLY_OPTIONS OPTIONS... (the *_ONLY ones may be empty)
-  name=$1; layer=$2; trip_km=$3; plan_only=$4; audit_only=$5; shift 5
+  # NAME LAYER TRIP_KM OPTIONS... (the options go to both plan and audit)
+  name=$1; layer=$2; trip_km=$3; shift 3
   d="$run/$name"
   mkdir -p "$d"
   cd "$d"
-  sc plan "$layer" $plan_only "$@" --max-trip-km "$trip_km" --out plan.geojson --gpx plan.gpx --directions plan-sheet.html \
+  sc plan "$layer" "$@" --max-trip-km "$trip_km" --out plan.geojson --gpx plan.gpx --directions plan-sheet.html \
     --report plan-report.html --json > plan.json
   drive plan.gpx drive.gpx
-  sc audit "$layer" drive.gpx $audit_only "$@" --streets-out streets.geojson --missed-out missed.geojson \
+  sc audit "$layer" drive.gpx "$@" --streets-out streets.geojson --missed-out missed.geojson \
     --mop-up mop-up.geojson --gpx mop-up.gpx --directions mop-up-sheet.html --report audit-report.html \
     --json > audit.json
   mask plan.json audit.json plan-report.html audit-report.html
@@ -84,9 +84,10 @@ one() {
 }
 
 p="--leave-out-cut-off --depot-part-only"
-one demo "$here/fixtures/demo/brackenford.geojson" 10 "" "" --depot=-31.2,44.6
-one vienna "$real/geojson-vienna-streets/vienna-streets.geojson" 40 "$p" --oneway-field=no_such_field
-one monaco "$real/osm-monaco-2021/monaco-latest.osm.pbf" 40 "$p" --mode=walk
-one aurich "$real/shp-aurich-osm-roads-dhdn-gk2/roads.shp" 40 "$p" --oneway-field=no_such_field --drop=type=footway,cycleway,track,path
+one demo "$here/fixtures/demo/brackenford.geojson" 10 --depot=-31.2,44.6
+one vienna "$real/geojson-vienna-streets/vienna-streets.geojson" 40 $p --oneway-field=no_such_field
+one monaco "$real/osm-monaco-2021/monaco-latest.osm.pbf" 40 $p --mode=walk
+one monaco-drive "$real/osm-monaco-2021/monaco-latest.osm.pbf" 20 $p
+one aurich "$real/shp-aurich-osm-roads-dhdn-gk2/roads.shp" 40 $p --oneway-field=no_such_field --drop=type=footway,cycleway,track,path
 cd "$run"
 find . -type f | LC_ALL=C sort | xargs sha256sum

@@ -62,7 +62,7 @@ public final class CirculationSearch {
             balance[v] = LinearExpr.newBuilder();
         }
         LinearExprBuilder objective = LinearExpr.newBuilder();
-        boolean undirected = !start.isDirected();
+        boolean undirected = !start.directed();
         for (int e = 0; e < m; e++) {
             Travel travel = network.travel(e);
             int passes = demand.passes(e);
@@ -145,7 +145,7 @@ public final class CirculationSearch {
             parent[v] = v;
         }
         for (int e = 0; e < m; e++) {
-            if (found.total(e) > 0) {
+            if (found.passes(e) > 0) {
                 MixedLpBound.union(parent, network.from(e), network.to(e));
             }
         }

@@ -1,8 +1,9 @@
 package org.streetcomb.solve;
 
 import java.util.Arrays;
+import java.util.stream.IntStream;
+import org.streetcomb.network.DijkstraSearch;
 import org.streetcomb.network.Heading;
-import org.streetcomb.network.MinHeap;
 import org.streetcomb.network.StreetNetwork;
 
 /**
@@ -129,7 +130,10 @@ final class ComponentConnector {
         return x;
     }
 
-    /** Shortest-path regions of the groups: distance, nearest group and parent edge of every node. */
+    /**
+     * Shortest-path regions of the groups: distance, nearest group and parent edge of every node, from one
+     * multi-source {@link DijkstraSearch} started at every group node.
+     */
     private static final class Regions {
         final double[] distance;
         final int[] label;
@@ -147,36 +151,16 @@ final class ComponentConnector {
             Arrays.fill(distance, Double.POSITIVE_INFINITY);
             Arrays.fill(label, -1);
             Arrays.fill(parentEdge, -1);
-            boolean[] settled = new boolean[n];
-            MinHeap heap = new MinHeap();
-            for (int v = 0; v < n; v++) {
-                if (group[v] >= 0) {
-                    distance[v] = 0;
-                    label[v] = group[v];
-                    heap.push(0, v);
-                }
+            DijkstraSearch search = new DijkstraSearch(network, heading);
+            search.startFrom(IntStream.range(0, n).filter(v -> group[v] >= 0).toArray());
+            while (search.next() >= 0) {
+                // every reachable node settled
             }
-            while (!heap.isEmpty()) {
-                double d = heap.peekKey();
-                int v = heap.peekValue();
-                heap.pop();
-                if (settled[v]) {
-                    continue;
-                }
-                settled[v] = true;
-                for (int i = network.incidenceStart(v); i < network.incidenceEnd(v); i++) {
-                    int e = network.incidentEdge(i);
-                    if (!heading.allows(network, e, v)) {
-                        continue;
-                    }
-                    int w = network.other(e, v);
-                    double dw = d + network.length(e);
-                    if (dw < distance[w]) {
-                        distance[w] = dw;
-                        label[w] = label[v];
-                        parentEdge[w] = e;
-                        heap.push(dw, w);
-                    }
+            for (int v = 0; v < n; v++) {
+                if (search.reached(v)) {
+                    distance[v] = search.distance(v);
+                    label[v] = group[search.origin(v)];
+                    parentEdge[v] = search.parentEdge(v);
                 }
             }
         }

@@ -47,7 +47,7 @@ public final class DirectedRuralPostman implements PostmanSolver {
         boolean[] servicedOrBalanced = new boolean[m];
         for (int e = 0; e < m; e++) {
             serviced[e] = demand.needs(e);
-            servicedOrBalanced[e] = balancedService.total(e) > 0;
+            servicedOrBalanced[e] = balancedService.passes(e) > 0;
         }
         ServiceGroups groups = ServiceGroups.of(problem, serviced);
         // joined by its own links, every group is reached; joined as the balanced service arcs group them,
@@ -124,7 +124,7 @@ public final class DirectedRuralPostman implements PostmanSolver {
     static int[] totals(Traversals traversals) {
         int[] total = new int[traversals.along().length];
         for (int e = 0; e < total.length; e++) {
-            total[e] = traversals.total(e);
+            total[e] = traversals.passes(e);
         }
         return total;
     }

@@ -367,47 +367,18 @@ public final class MixedPostman implements PostmanSolver {
         }
     }
 
-    /** Gives every undirected pass a direction by walking closed trails through the (even) undirected passes. */
+    /**
+     * Gives every undirected pass a direction by walking closed trails through the (even) undirected passes,
+     * from each node in turn: the greedy steps of the Euler walk ({@link EulerWalk#step}), O(V + E).
+     */
     private static void orientAlongTrails(StreetNetwork network, Oriented oriented) {
-        int n = network.nodeCount();
-        int m = network.edgeCount();
-        int[] start = new int[n + 1];
-        int instances = 0;
-        for (int e = 0; e < m; e++) {
-            start[network.from(e) + 1] += oriented.free[e];
-            start[network.to(e) + 1] += oriented.free[e];
-            instances += oriented.free[e];
-        }
-        for (int v = 0; v < n; v++) {
-            start[v + 1] += start[v];
-        }
-        int[] incident = new int[2 * instances];
-        int[] edgeOf = new int[instances];
-        int[] fill = start.clone();
-        int c = 0;
-        for (int e = 0; e < m; e++) {
-            for (int k = 0; k < oriented.free[e]; k++) {
-                edgeOf[c] = e;
-                incident[fill[network.from(e)]++] = c;
-                incident[fill[network.to(e)]++] = c;
-                c++;
-            }
-        }
-        boolean[] used = new boolean[instances];
-        int[] next = start.clone();
-        for (int s = 0; s < n; s++) {
+        int[] none = new int[network.edgeCount()];
+        EulerWalk trails = new EulerWalk(network, none, none, oriented.free);
+        for (int s = 0; s < network.nodeCount(); s++) {
             int v = s;
-            while (true) {
-                while (next[v] < start[v + 1] && used[incident[next[v]]]) {
-                    next[v]++;
-                }
-                if (next[v] == start[v + 1]) {
-                    break;
-                }
-                int i = incident[next[v]++];
-                used[i] = true;
-                int e = edgeOf[i];
-                if (network.from(e) == v) {
+            for (int step = trails.step(v); step >= 0; step = trails.step(v)) {
+                int e = step / 2;
+                if (step % 2 == 1) {
                     oriented.along[e]++;
                 } else {
                     oriented.against[e]++;

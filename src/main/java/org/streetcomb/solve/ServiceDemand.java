@@ -9,7 +9,7 @@ import org.streetcomb.read.Travel;
  * one-way street needs one pass along its permitted direction (two for both kerbs of a one-way street).
  * An edge with no demand may still be driven as deadhead.
  */
-public record ServiceDemand(int[] along, int[] against, int[] either) {
+public record ServiceDemand(int[] along, int[] against, int[] either) implements PassCounts {
 
     /** @param required which edges must be serviced */
     public static ServiceDemand of(StreetNetwork network, boolean[] required, KerbMode kerbs) {
@@ -45,12 +45,7 @@ public record ServiceDemand(int[] along, int[] against, int[] either) {
     }
 
     public boolean needs(int edge) {
-        return along[edge] + against[edge] + either[edge] > 0;
-    }
-
-    /** Service passes of the edge, all directions. */
-    public int passes(int edge) {
-        return along[edge] + against[edge] + either[edge];
+        return passes(edge) > 0;
     }
 
     /** True when no edge has a fixed-direction demand. */
@@ -61,25 +56,6 @@ public record ServiceDemand(int[] along, int[] against, int[] either) {
             }
         }
         return true;
-    }
-
-    /** True when every demand has a fixed direction. */
-    public boolean directed() {
-        for (int x : either) {
-            if (x > 0) {
-                return false;
-            }
-        }
-        return true;
-    }
-
-    /** Total length of the service passes, metres. */
-    public double length(StreetNetwork network) {
-        double sum = 0;
-        for (int e = 0; e < along.length; e++) {
-            sum += passes(e) * network.length(e);
-        }
-        return sum;
     }
 
     /** This demand with the edges outside {@code keep} dropped. */

@@ -134,7 +134,7 @@ final class ServiceOrderSearch {
         int[] along = before.along().clone();
         int[] against = before.against().clone();
         int[] either = before.either().clone();
-        boolean undirected = !before.isDirected();
+        boolean undirected = !before.directed();
         int improved = 0;
         for (int j = 0; j < starts.length; j++) {
             int part = components.of(starts[j]);
@@ -167,7 +167,7 @@ final class ServiceOrderSearch {
             double found = 0;
             for (int e = 0; e < network.edgeCount(); e++) {
                 if (components.of(network.from(e)) == part) {
-                    old += before.total(e) * network.length(e);
+                    old += before.passes(e) * network.length(e);
                     found += (a[e] + b[e]) * network.length(e);
                 }
             }

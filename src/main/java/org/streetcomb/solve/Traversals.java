@@ -1,14 +1,12 @@
 package org.streetcomb.solve;
 
-import org.streetcomb.network.StreetNetwork;
-
 /**
  * How many times a solution drives each edge, service and deadhead together: along its digitised
  * direction, against it, or in either direction. Undirected solutions use only {@code either}; solutions
  * on networks with one-way streets fix every direction and use only {@code along} and {@code against}, so
  * the tour builder can run an undirected or a directed Euler walk.
  */
-public record Traversals(int[] along, int[] against, int[] either) {
+public record Traversals(int[] along, int[] against, int[] either) implements PassCounts {
 
     public static Traversals undirected(int[] either) {
         return new Traversals(new int[either.length], new int[either.length], either);
@@ -16,27 +14,5 @@ public record Traversals(int[] along, int[] against, int[] either) {
 
     public static Traversals directed(int[] along, int[] against) {
         return new Traversals(along, against, new int[along.length]);
-    }
-
-    public int total(int edge) {
-        return along[edge] + against[edge] + either[edge];
-    }
-
-    public boolean isDirected() {
-        for (int x : either) {
-            if (x > 0) {
-                return false;
-            }
-        }
-        return true;
-    }
-
-    /** Total driven length, metres. */
-    public double length(StreetNetwork network) {
-        double sum = 0;
-        for (int e = 0; e < along.length; e++) {
-            sum += total(e) * network.length(e);
-        }
-        return sum;
     }
 }
