@@ -77,8 +77,8 @@ public final class PlanLayers {
             for (int e : plan.leftOut()) {
                 metres += plan.network().length(e);
                 left.add(new MapFeature(new double[][] {NetworkLayer.edgePoints(plan.network(), e, true)}, null, null,
-                        NetworkLayer.streetName(plan.network().feature(e)), Map.of("Feature",
-                        plan.network().feature(e).id(), "Length", String.format(Locale.ROOT, "%.0f m", plan.network().length(e)))));
+                        NetworkLayer.streetName(plan.network().feature(e)), details(
+                        plan.network().feature(e).id(), String.format(Locale.ROOT, "%.0f m", plan.network().length(e)))));
             }
             layers.add(new MapLayer("left-out", String.format(Locale.ROOT, "Left out (%.2f km)", metres / 1000),
                     "streets asked for that one-way streets cut off: not planned", MapLayer.Kind.LINES,
@@ -319,5 +319,13 @@ public final class PlanLayers {
             double[] middle = chevron(line(), 0);
             return MapFeature.point(middle[2], middle[3], groupId(tour), steps(), details);
         }
+    }
+
+    /** A left-out street's details in a fixed order (Map.of iterates in an order that changes run to run). */
+    private static Map<String, String> details(String feature, String length) {
+        Map<String, String> details = new java.util.LinkedHashMap<>();
+        details.put("Feature", feature);
+        details.put("Length", length);
+        return details;
     }
 }

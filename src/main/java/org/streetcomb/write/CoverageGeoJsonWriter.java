@@ -5,8 +5,6 @@ import org.streetcomb.coverage.EdgeSlice;
 import org.streetcomb.coverage.MissedPart;
 import org.streetcomb.coverage.StreetCoverage;
 
-import com.fasterxml.jackson.core.JsonEncoding;
-import com.fasterxml.jackson.core.JsonFactory;
 import com.fasterxml.jackson.core.JsonGenerator;
 import java.io.IOException;
 import java.math.BigDecimal;
@@ -16,7 +14,6 @@ import java.util.Locale;
 import org.locationtech.jts.geom.Coordinate;
 import org.streetcomb.network.StreetNetwork;
 import org.streetcomb.read.RoadFeature;
-import org.streetcomb.write.AtomicFile;
 import org.streetcomb.write.GeoJsonPositions;
 
 /**
@@ -24,7 +21,7 @@ import org.streetcomb.write.GeoJsonPositions;
  * at most 7 decimals) for a map viewer: one layer of streets with their status and driven share, and one
  * of the missed parts as lines drawn in the direction they must still be driven ({@code way} = either,
  * along or against the street's digitised direction). Lengths are metres with 3 decimals, shares 0..1
- * with 4. Files are written through {@link AtomicFile}.
+ * with 4. Files are written through {@link FeatureCollectionFile}.
  */
 public final class CoverageGeoJsonWriter {
 
@@ -32,7 +29,7 @@ public final class CoverageGeoJsonWriter {
     }
 
     public static void writeStreets(Path target, CoverageReport report) {
-        write(target, json -> {
+        FeatureCollectionFile.write(target, json -> {
             for (StreetCoverage street : report.streets()) {
                 RoadFeature f = street.feature();
                 json.writeStartObject();
@@ -62,7 +59,7 @@ public final class CoverageGeoJsonWriter {
 
     public static void writeMissed(Path target, CoverageReport report) {
         StreetNetwork network = report.network();
-        write(target, json -> {
+        FeatureCollectionFile.write(target, json -> {
             for (MissedPart part : report.missed()) {
                 RoadFeature f = network.feature(part.edge());
                 json.writeStartObject();
@@ -77,26 +74,6 @@ public final class CoverageGeoJsonWriter {
                 lineString(json, EdgeSlice.of(network, part.edge(), part.from(), part.to(),
                         part.way() == MissedPart.Way.AGAINST));
                 json.writeEndObject();
-            }
-        });
-    }
-
-    @FunctionalInterface
-    private interface Features {
-        void write(JsonGenerator json) throws IOException;
-    }
-
-    private static void write(Path target, Features features) {
-        AtomicFile.write(target, out -> {
-            try (JsonGenerator json = new JsonFactory().createGenerator(out, JsonEncoding.UTF8)
-                    .enable(JsonGenerator.Feature.WRITE_BIGDECIMAL_AS_PLAIN)) {
-                json.writeStartObject();
-                json.writeStringField("type", "FeatureCollection");
-                json.writeArrayFieldStart("features");
-                features.write(json);
-                json.writeEndArray();
-                json.writeEndObject();
-                json.writeRaw('\n');
             }
         });
     }

@@ -1,7 +1,5 @@
 package org.streetcomb.write;
 
-import com.fasterxml.jackson.core.JsonEncoding;
-import com.fasterxml.jackson.core.JsonFactory;
 import com.fasterxml.jackson.core.JsonGenerator;
 import java.io.IOException;
 import java.math.BigDecimal;
@@ -24,18 +22,9 @@ import org.streetcomb.check.Finding;
 public final class FindingGeoJsonWriter {
 
     public void write(Path target, List<Finding> findings) {
-        AtomicFile.write(target, out -> {
-            try (JsonGenerator json = new JsonFactory().createGenerator(out, JsonEncoding.UTF8)
-                    .enable(JsonGenerator.Feature.WRITE_BIGDECIMAL_AS_PLAIN)) {
-                json.writeStartObject();
-                json.writeStringField("type", "FeatureCollection");
-                json.writeArrayFieldStart("features");
-                for (Finding finding : findings) {
-                    writeFinding(json, finding);
-                }
-                json.writeEndArray();
-                json.writeEndObject();
-                json.writeRaw('\n');
+        FeatureCollectionFile.write(target, json -> {
+            for (Finding finding : findings) {
+                writeFinding(json, finding);
             }
         });
     }

@@ -1,7 +1,5 @@
 package org.streetcomb.write;
 
-import com.fasterxml.jackson.core.JsonEncoding;
-import com.fasterxml.jackson.core.JsonFactory;
 import com.fasterxml.jackson.core.JsonGenerator;
 import java.io.IOException;
 import java.math.BigDecimal;
@@ -27,23 +25,14 @@ public final class TourGeoJsonWriter {
     }
 
     public void write(Path target, StreetNetwork network, List<Tour> tours) {
-        AtomicFile.write(target, out -> {
-            try (JsonGenerator json = new JsonFactory().createGenerator(out, JsonEncoding.UTF8)
-                    .enable(JsonGenerator.Feature.WRITE_BIGDECIMAL_AS_PLAIN)) {
-                json.writeStartObject();
-                json.writeStringField("type", "FeatureCollection");
-                json.writeArrayFieldStart("features");
+        FeatureCollectionFile.write(target, json -> {
+            for (int t = 0; t < tours.size(); t++) {
+                writeTour(json, network, tours.get(t), t + 1);
+            }
+            if (steps) {
                 for (int t = 0; t < tours.size(); t++) {
-                    writeTour(json, network, tours.get(t), t + 1);
+                    writeSteps(json, network, tours.get(t), t + 1);
                 }
-                if (steps) {
-                    for (int t = 0; t < tours.size(); t++) {
-                        writeSteps(json, network, tours.get(t), t + 1);
-                    }
-                }
-                json.writeEndArray();
-                json.writeEndObject();
-                json.writeRaw('\n');
             }
         });
     }

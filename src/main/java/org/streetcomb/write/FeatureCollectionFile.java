@@ -1,0 +1,38 @@
+package org.streetcomb.write;
+
+import com.fasterxml.jackson.core.JsonEncoding;
+import com.fasterxml.jackson.core.JsonFactory;
+import com.fasterxml.jackson.core.JsonGenerator;
+import java.io.IOException;
+import java.nio.file.Path;
+
+/**
+ * The one place a GeoJSON FeatureCollection file (RFC 7946) is opened and closed: UTF-8, numbers written
+ * plain (no exponent), a final newline, through {@link AtomicFile}. Writers supply the features.
+ */
+public final class FeatureCollectionFile {
+
+    /** Writes the features of a collection into its open {@code features} array. */
+    @FunctionalInterface
+    public interface Features {
+        void write(JsonGenerator json) throws IOException;
+    }
+
+    private FeatureCollectionFile() {
+    }
+
+    public static void write(Path target, Features features) {
+        AtomicFile.write(target, out -> {
+            try (JsonGenerator json = new JsonFactory().createGenerator(out, JsonEncoding.UTF8)
+                    .enable(JsonGenerator.Feature.WRITE_BIGDECIMAL_AS_PLAIN)) {
+                json.writeStartObject();
+                json.writeStringField("type", "FeatureCollection");
+                json.writeArrayFieldStart("features");
+                features.write(json);
+                json.writeEndArray();
+                json.writeEndObject();
+                json.writeRaw('\n');
+            }
+        });
+    }
+}
