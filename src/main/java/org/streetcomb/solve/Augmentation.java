@@ -12,4 +12,21 @@ package org.streetcomb.solve;
  */
 public record Augmentation(Traversals traversals, double deadhead, int oddNodes, String method, boolean certified,
                            double lowerBound) {
+
+    /**
+     * Which relaxation {@link #lowerBound} comes from, as the method names it after "bound: " (up to the
+     * closing parenthesis or semicolon), e.g. "LP relaxation with 348 odd cuts"; empty where it does not say.
+     */
+    public String boundSource() {
+        int i = method.indexOf("bound: ");
+        if (i < 0) {
+            return "";
+        }
+        int j = i + "bound: ".length();
+        int k = j;
+        while (k < method.length() && method.charAt(k) != ')' && method.charAt(k) != ';') {
+            k++;
+        }
+        return method.substring(j, k);
+    }
 }
