@@ -19,4 +19,15 @@ public final class InputError extends RuntimeException {
                 ? file + ": " + problem
                 : file + ": " + place + ": " + problem);
     }
+
+    /**
+     * A library's exception in the user's words: the first line of its message with Java class names taken
+     * out, or a plain phrase when the message is empty.
+     */
+    public static String inWords(Throwable e) {
+        String message = e.getMessage() == null ? "" : e.getMessage().lines().findFirst().orElse("");
+        String plain = message.replaceAll("\\b(?:[a-z_][a-z0-9_]*\\.)+[A-Z]\\w*(?:Exception|Error)\\b:?\\s*", "")
+                .replaceAll("\\b[A-Z]\\w*(?:Exception|Error)\\b:?\\s*", "").strip();
+        return plain.isEmpty() ? "the data make no sense at this point" : plain;
+    }
 }

@@ -16,6 +16,8 @@ import org.apache.sis.referencing.crs.AbstractCRS;
 import org.apache.sis.referencing.cs.AxesConvention;
 import org.locationtech.jts.geom.Coordinate;
 import org.opengis.referencing.crs.CoordinateReferenceSystem;
+import org.opengis.referencing.crs.GeodeticCRS;
+import org.opengis.referencing.cs.CartesianCS;
 import org.opengis.referencing.operation.CoordinateOperation;
 import org.opengis.referencing.operation.MathTransform;
 import org.opengis.referencing.operation.TransformException;
@@ -41,6 +43,12 @@ final class Wgs84Transform {
 
     /** Coarser datum shifts are refused: street centrelines would no longer meet GPS tracks or depots. */
     static final double WORST_ACCURACY_METRES = 25;
+
+    /** Deepest bracket nesting taken in WKT; real definitions stay under 10 (see {@link #checkShape}). */
+    static final int MAX_WKT_DEPTH = 32;
+
+    /** Longest WKT taken: the longest EPSG definitions with their remarks are a few kilobytes. */
+    static final int MAX_WKT_CHARS = 1 << 16;
 
     /** SIS logs a notice about its optional data directory on first use; users need not see it. */
     private static final Logger SIS_LOG = Logger.getLogger("org.apache.sis");
@@ -70,6 +78,7 @@ final class Wgs84Transform {
      * for data within the given extent in source coordinates.
      */
     static Wgs84Transform forWkt(String wkt, Object file, double minX, double minY, double maxX, double maxY) {
+        checkShape(wkt, file);
         String compact = wkt.strip().replaceAll("\\s+(?=(?:[^\"]*\"[^\"]*\")*[^\"]*$)", "").toUpperCase(Locale.ROOT);
         if (PLAIN_WGS84.matcher(compact).matches()) {
             return plainLonLat();
@@ -83,6 +92,10 @@ final class Wgs84Transform {
         if (crs.strip().equalsIgnoreCase("EPSG:4326")) {
             return plainLonLat();
         }
+        if (!crs.toUpperCase(Locale.ROOT).startsWith("EPSG:")) {
+            // WKT in a file or on the command line is taken exactly as a .prj holding the same text would be
+            return forWkt(optionWkt(crs), origin, minX, minY, maxX, maxY);
+        }
         return to(fromOption(crs), minX, minY, maxX, maxY, origin);
     }
 
@@ -92,6 +105,7 @@ final class Wgs84Transform {
 
     /** The CRS of a .prj file's WKT (OGC or ESRI dialect). */
     static CoordinateReferenceSystem fromWkt(String wkt, Object file) {
+        checkShape(wkt, file);
         try {
             return CRS.fromWKT(EsriDatumNames.withEpsgCode(wkt.strip()));
         } catch (FactoryException | RuntimeException e) {
@@ -108,11 +122,53 @@ final class Wgs84Transform {
                 throw new InputError("--crs " + crs + ": not a known EPSG code (" + firstLine(e) + ")");
             }
         }
-        Path file = Path.of(crs);
+        return fromWkt(optionWkt(crs), "--crs " + crs);
+    }
+
+    /** The WKT of a --crs value: the text itself when it looks like WKT, else the file it names. */
+    private static String optionWkt(String crs) {
+        if (crs.strip().matches("(?s)[A-Za-z_]+\\s*[\\[(].*")) {
+            return crs;
+        }
         try {
-            return fromWkt(Files.readString(file, StandardCharsets.UTF_8), file);
-        } catch (IOException e) {
-            throw new InputError("--crs " + crs + ": expected EPSG:code or a readable file holding WKT");
+            Path file = Path.of(crs);
+            if (Files.isRegularFile(file) && Files.size(file) > MAX_WKT_CHARS) {
+                throw new InputError("--crs " + crs + ": " + Files.size(file) + " bytes is too long for a coordinate "
+                        + "reference system definition (at most " + MAX_WKT_CHARS + ")");
+            }
+            return Files.readString(file, StandardCharsets.UTF_8);
+        } catch (IOException | RuntimeException e) {
+            if (e instanceof InputError error) {
+                throw error;
+            }
+            throw new InputError("--crs " + crs + ": expected EPSG:code, WKT text or a readable file holding WKT");
+        }
+    }
+
+    /**
+     * Refuses WKT that no real definition resembles before the parser sees it: the parser recurses once per
+     * bracket level, so text nested thousands deep would overflow the stack. Real definitions (a projected
+     * CRS over a geographic one over a datum over an ellipsoid) nest under 10 deep.
+     */
+    static void checkShape(String wkt, Object file) {
+        if (wkt.length() > MAX_WKT_CHARS) {
+            throw InputError.at(file, null, wkt.length() + " characters is too long for a coordinate reference system "
+                    + "definition (at most " + MAX_WKT_CHARS + ")");
+        }
+        int depth = 0;
+        boolean quoted = false;
+        for (int i = 0; i < wkt.length(); i++) {
+            char c = wkt.charAt(i);
+            if (c == '"') {
+                quoted = !quoted;
+            } else if (!quoted && (c == '[' || c == '(')) {
+                if (++depth > MAX_WKT_DEPTH) {
+                    throw InputError.at(file, "character " + (i + 1), "the coordinate reference system definition is "
+                            + "nested more than " + MAX_WKT_DEPTH + " brackets deep: not a real definition");
+                }
+            } else if (!quoted && (c == ']' || c == ')')) {
+                depth--;
+            }
         }
     }
 
@@ -122,6 +178,7 @@ final class Wgs84Transform {
      */
     static Wgs84Transform to(CoordinateReferenceSystem source, double minX, double minY, double maxX, double maxY,
                              Object file) {
+        source = horizontal(source, file);
         CoordinateReferenceSystem eastNorth = AbstractCRS.castOrCopy(source).forConvention(AxesConvention.RIGHT_HANDED);
         String name = source.getName().getCode();
         try {
@@ -145,6 +202,24 @@ final class Wgs84Transform {
         } catch (FactoryException | TransformException e) {
             throw InputError.at(file, null, "no transformation from " + name + " to WGS 84: " + firstLine(e));
         }
+    }
+
+    /**
+     * The two-dimensional part of {@code source} that road coordinates are in; a geocentric (earth-centred
+     * X, Y, Z) system has none and is refused in words rather than fed two numbers where it takes three.
+     */
+    private static CoordinateReferenceSystem horizontal(CoordinateReferenceSystem source, Object file) {
+        String name = source.getName().getCode();
+        if (source instanceof GeodeticCRS && source.getCoordinateSystem() instanceof CartesianCS) {
+            throw InputError.at(file, null, name + " is a geocentric coordinate reference system (X, Y, Z from the "
+                    + "earth's centre): road layers need a geographic (longitude/latitude) or projected one");
+        }
+        CoordinateReferenceSystem flat = CRS.getHorizontalComponent(source);
+        if (flat == null || flat.getCoordinateSystem().getDimension() != 2) {
+            throw InputError.at(file, null, name + " has no horizontal (longitude/latitude or easting/northing) part: "
+                    + "road layers need a geographic or projected coordinate reference system");
+        }
+        return flat;
     }
 
     /** Transforms {@code count} x,y pairs in place to longitude,latitude. */
@@ -185,6 +260,6 @@ final class Wgs84Transform {
 
     private static String firstLine(Exception e) {
         String message = e.getMessage();
-        return message == null ? e.getClass().getSimpleName() : message.lines().findFirst().orElse("");
+        return InputError.inWords(e);
     }
 }

@@ -135,6 +135,52 @@ class ShapefileBadInputTest {
         assertEquals(293, layer.report().featuresRead());
     }
 
+    @Test
+    void prjNestedTooDeep() throws IOException {
+        // A hostile .prj nested thousands of brackets deep once overflowed the WKT parser's stack
+        Path shp = copy(MESA, "streets");
+        Files.writeString(dir.resolve("streets.prj"), "PROJCS[".repeat(5_000) + "]".repeat(5_000));
+        assertRefused(shp, "streets.prj: character 231: the coordinate reference system definition is nested more than 32");
+    }
+
+    @Test
+    void prjTooLong() throws IOException {
+        Path shp = copy(MESA, "streets");
+        Files.writeString(dir.resolve("streets.prj"), "PROJCS[".repeat(100_000));
+        assertRefused(shp, "streets.prj: 700000 characters is too long for a coordinate reference system definition");
+    }
+
+    @Test
+    void crsTextNestedTooDeep() throws IOException {
+        Path shp = copy(MESA, "streets");
+        Path wkt = dir.resolve("deep.wkt");
+        Files.writeString(wkt, "GEOGCS[".repeat(5_000));
+        assertRefused(shp, "nested more than 32 brackets deep", "--crs=" + wkt);
+    }
+
+    @Test
+    void geocentricCrsRefusedInWords() throws IOException {
+        // EPSG:4978 is WGS 84 geocentric (X, Y, Z from the earth's centre); it once ended in an array index error
+        Path shp = copy(MESA, "streets");
+        assertRefused(shp, "WGS 84 is a geocentric coordinate reference system", "--crs=EPSG:4978");
+    }
+
+    @Test
+    void crsWktTakenAsThePrjWouldBe() throws IOException {
+        // The same ESRI text that a .prj may hold, given on the command line (as a file and as text), plans
+        Path shp = copy(MESA, "streets");
+        String prj = Files.readString(dir.resolve("streets.prj"));
+        Files.delete(dir.resolve("streets.prj"));
+        Path wkt = dir.resolve("grid.wkt");
+        Files.writeString(wkt, prj);
+        for (String crs : new String[] {wkt.toString(), prj}) {
+            java.io.StringWriter err = new java.io.StringWriter();
+            int code = org.streetcomb.cli.Main.run(new String[] {"plan", shp.toString(), "--out=" + dir.resolve("t.geojson"),
+                    "--crs=" + crs}, new java.io.PrintWriter(new java.io.StringWriter()), new java.io.PrintWriter(err, true));
+            assertEquals(0, code, err.toString());
+        }
+    }
+
     private static void entry(ZipOutputStream out, String name, byte[] bytes) throws IOException {
         out.putNextEntry(new ZipEntry(name));
         out.write(bytes);
