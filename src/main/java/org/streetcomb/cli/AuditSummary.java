@@ -134,7 +134,7 @@ final class AuditSummary {
         s.line("Network", "%.3f km in %d edges", coverage.network().totalLength() / 1000, coverage.network().edgeCount());
         s.line("Tracks", "%d file%s, %d segment%s, %d points%s", audit.files().size(), plural(audit.files().size()),
                 segments, plural(segments), points, untimed == 0 ? "" : " (" + untimed + " without time)");
-        s.line("Cleaning", "%d thinned (within 2 sigma of the fix before), %d with time not moving forward, "
+        s.line("Cleaning", "%d thinned (within half a sigma of the fix before), %d with time not moving forward, "
                 + "%d speed spikes, %d splits at impossible speed", tally.thinned(), tally.backwards(), tally.spikes(),
                 tally.splits());
         s.line("Matching", "%d points on streets in %d stretch%s, %d off the network (> %.0f m), %d dropouts or jumps "

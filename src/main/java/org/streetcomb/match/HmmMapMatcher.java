@@ -250,7 +250,7 @@ public final class HmmMapMatcher {
     /** Fills the scores of {@code next} from {@code previous}; false when no believable route joins them. */
     private boolean advance(Layer previous, Layer next) {
         double line = Math.hypot(next.x - previous.x, next.y - previous.y);
-        double limit = limit(previous, next);
+        double limit = limit(previous, next, line);
         double seconds = next.time - previous.time;
         double reach = seconds > 0 && pace > 0 ? Math.min(limit, Math.max(line, pace * seconds)) : line;
         Arrays.fill(next.score, Double.NEGATIVE_INFINITY);
@@ -353,12 +353,17 @@ public final class HmmMapMatcher {
         return network.degree(node) > 1 && !pocketNodes[node];
     }
 
-    /** The longest believable route between two fixes. */
-    private double limit(Layer previous, Layer next) {
+    /**
+     * The longest believable route between two fixes {@code line} metres apart. Fixes without times (a
+     * planned route, a line drawn by hand) stand only where the line bends, so a gap between them is no sign
+     * of a dropout: a route about as long as the straight line (within 2 sigma) is believed however long.
+     */
+    private double limit(Layer previous, Layer next, double line) {
         double seconds = next.time - previous.time;
-        return seconds > 0
-                ? Math.min(settings.maxGap(), settings.maxSpeed() * seconds + TrackCleaner.NOISE_SIGMAS * settings.sigma())
-                : settings.maxGap();
+        if (seconds > 0) {
+            return Math.min(settings.maxGap(), settings.maxSpeed() * seconds + TrackCleaner.NOISE_SIGMAS * settings.sigma());
+        }
+        return Double.isNaN(seconds) ? Math.max(settings.maxGap(), line + 2 * settings.sigma()) : settings.maxGap();
     }
 
     /** Distances from {@code exit} to the entry nodes of the next states, up to {@code limit}. */

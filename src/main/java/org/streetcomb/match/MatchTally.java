@@ -41,7 +41,7 @@ public final class MatchTally {
         return splits;
     }
 
-    /** Fixes dropped because they lay within twice the GPS noise of the fix before (standing or crawling). */
+    /** Fixes dropped because they lay within half the GPS noise of the fix before (standing or crawling). */
     public int thinned() {
         return thinned;
     }

@@ -16,9 +16,9 @@ import org.streetcomb.read.TrackSegment;
  *       {@value #NOISE_SIGMAS} sigma for noise) is dropped when the fix after it
  *       is within the limit again (a lone spike); otherwise the segment is split there (the receiver jumped,
  *       or time was lost), and nothing is credited across the split.</li>
- *   <li>A fix within twice the GPS noise of the last kept fix is dropped, as Newson &amp; Krumm (2009, section
- *       4) do: while the vehicle stands or crawls, such fixes carry only noise, and their random steps
- *       backwards would read as reversals.</li>
+ *   <li>A fix within half the GPS noise of the last kept fix is dropped ({@link #THIN_SIGMAS}): while the
+ *       vehicle stands, such fixes carry only noise. Newson &amp; Krumm (2009, section 4) thin within twice
+ *       the noise, which also drops the fixes that show a short street was driven.</li>
  * </ul>
  * Fixes without times pass the time and speed checks. O(n) per segment.
  */
@@ -34,6 +34,14 @@ public final class TrackCleaner {
      */
     static final double NOISE_SIGMAS = 6;
 
+    /**
+     * A fix this many sigmas or less from the last kept one is dropped. Newson &amp; Krumm thin within 2 sigma;
+     * that drops the very fixes that show a short street was driven (dual carriageway links, roundabout
+     * pieces, the 10-20 m connectors of real junctions), and the matcher's signed-step charge already makes
+     * the backward steps of a standing vehicle's noise cheap. Measured in docs/quality.md ("Thinning").
+     */
+    static final double THIN_SIGMAS = Double.parseDouble(System.getProperty("streetcomb.thinSigmas", "0.5"));
+
     private final double thinWithin;
     private final double maxSpeed;
     private final double noiseAllowance;
@@ -43,7 +51,7 @@ public final class TrackCleaner {
      * @param maxSpeed  the highest believable speed in metres per second
      */
     public TrackCleaner(double sigma, double maxSpeed) {
-        this.thinWithin = 2 * sigma;
+        this.thinWithin = THIN_SIGMAS * sigma;
         this.maxSpeed = maxSpeed;
         this.noiseAllowance = NOISE_SIGMAS * sigma;
     }
