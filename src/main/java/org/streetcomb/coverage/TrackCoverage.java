@@ -29,11 +29,15 @@ public final class TrackCoverage {
     private final List<int[]> pockets;
     private final StreetIndex index;
     private final double driftWindow;
+    private final double sigma;
     /**
      * Drift estimates made in turn, each from the match of the fixes the previous one corrected: a first
      * match misled by the drift (along two parallel streets) biases the first estimate towards zero.
      */
     static final int DRIFT_PASSES = 2;
+
+    /** The drift is estimated from fixes this many sigmas apart (Newson &amp; Krumm's thinning). */
+    static final double DRIFT_THIN_SIGMAS = 2;
 
     /** A dead-end structure up to this many sigmas across is a turning pocket, credited whole once entered. */
     static final double POCKET_SIGMAS = 4;
@@ -43,6 +47,7 @@ public final class TrackCoverage {
         this.cleaner = new TrackCleaner(settings.sigma(), settings.maxSpeed());
         this.index = new StreetIndex(network);
         this.driftWindow = settings.driftWindow();
+        this.sigma = settings.sigma();
         this.pockets = TurningPockets.of(network, index.frame(), POCKET_SIGMAS * settings.sigma());
         this.matcher = new HmmMapMatcher(network, index, settings, TurningPockets.nodes(network, pockets));
         this.driven = new DrivenIntervals(network);
@@ -75,7 +80,7 @@ public final class TrackCoverage {
                 return segment;
             }
         }
-        double[][] residual = matcher.residuals(segment, run);
+        double[][] residual = matcher.residuals(segment, TrackCleaner.sparser(segment, run, DRIFT_THIN_SIGMAS * sigma));
         double[] lon = segment.lon().clone();
         double[] lat = segment.lat().clone();
         LocalFrame frame = index.frame();

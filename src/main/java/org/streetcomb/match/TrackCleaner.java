@@ -115,6 +115,22 @@ public final class TrackCleaner {
         return -1;
     }
 
+    /**
+     * The fixes of a run at least {@code within} metres from the last one kept, as Newson &amp; Krumm thin
+     * (the drift estimate is made on such a sparser run: its first match must not be led along a parallel
+     * street by fixes that follow the drift closely).
+     */
+    public static int[] sparser(TrackSegment segment, int[] run, double within) {
+        int[] kept = new int[run.length];
+        int n = 0;
+        for (int i : run) {
+            if (n == 0 || distance(segment, kept[n - 1], i) >= within) {
+                kept[n++] = i;
+            }
+        }
+        return Arrays.copyOf(kept, n);
+    }
+
     private static double distance(TrackSegment segment, int a, int b) {
         return GeodesicLength.between(segment.lon()[a], segment.lat()[a], segment.lon()[b], segment.lat()[b]);
     }

@@ -50,11 +50,20 @@ class TrackCleanerTest {
     }
 
     @Test
-    void fixesWithinTwoSigmaOfTheLastKeptOneAreThinnedAsNewsonAndKrummDo() {
-        // sigma 10 m: fixes 11 m apart are within 20 m of the last kept one every other time
-        TrackCleaner.Result r = new TrackCleaner(10, 50).clean(track(new double[] {0, 1, 2, 3, 4}, new double[] {0, 1, 2, 3, 4}));
+    void fixesWithinHalfASigmaOfTheLastKeptOneAreThinned() {
+        // sigma 40 m: fixes 11 m apart are within 20 m of the last kept one every other time
+        TrackCleaner.Result r = new TrackCleaner(40, 50).clean(track(new double[] {0, 1, 2, 3, 4}, new double[] {0, 1, 2, 3, 4}));
         assertEquals(2, r.thinned());
         assertArrayEquals(new int[] {0, 2, 4}, r.runs().get(0));
+        // sigma 10 m: every fix 11 m apart is kept
+        assertEquals(0, new TrackCleaner(10, 50).clean(track(new double[] {0, 1, 2, 3, 4},
+                new double[] {0, 1, 2, 3, 4})).thinned());
+    }
+
+    @Test
+    void theSparserRunThinsWithinTwoSigmaAsNewsonAndKrummDo() {
+        TrackSegment fixes = track(new double[] {0, 1, 2, 3, 4}, new double[] {0, 1, 2, 3, 4});
+        assertArrayEquals(new int[] {0, 2, 4}, TrackCleaner.sparser(fixes, new int[] {0, 1, 2, 3, 4}, 20));
     }
 
     @Test
