@@ -1,10 +1,6 @@
 package org.streetcomb.cli;
 
-import org.streetcomb.network.DepotPlacement;
 import org.streetcomb.network.LonLat;
-import org.streetcomb.network.NearestNode;
-import org.streetcomb.network.StreetNetwork;
-import org.streetcomb.read.RoadLayer;
 import picocli.CommandLine;
 import picocli.CommandLine.Option;
 
@@ -27,11 +23,5 @@ final class DepotOptions {
         if (!(reach >= 0) || !Double.isFinite(reach)) {
             throw new CommandLine.ParameterException(commandLine, "--depot-reach must be 0 or more metres");
         }
-    }
-
-    /** The depot node on the network, or -1 for a network without edges. */
-    int node(RoadLayer layer, StreetNetwork network) {
-        NearestNode.Hit hit = DepotPlacement.place(network, layer.features(), position, reach, layer.source());
-        return hit == null ? -1 : hit.node();
     }
 }

@@ -6,16 +6,12 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.concurrent.Callable;
 import org.streetcomb.ExitCode;
-import org.streetcomb.check.CheckInput;
 import org.streetcomb.check.CheckOptions;
 import org.streetcomb.check.Finding;
 import org.streetcomb.check.HealthReport;
-import org.streetcomb.check.NetworkCheck;
-import org.streetcomb.network.NetworkBuilder;
 import org.streetcomb.network.StreetNetwork;
+import org.streetcomb.plan.HealthCheck;
 import org.streetcomb.timing.StageClock;
-import org.streetcomb.read.LayerReaders;
-import org.streetcomb.read.RoadLayer;
 import org.streetcomb.report.FindingLayers;
 import org.streetcomb.report.MapLayer;
 import org.streetcomb.report.NetworkLayer;
@@ -85,12 +81,10 @@ public final class HealthCommand implements Callable<Integer> {
         map.validate();
         CheckOptions options = new CheckOptions(snap, nearMiss, stub, duplicate);
         StageClock clock = new StageClock(TerminalProgress.forCommandLine(quiet, System.err));
-        RoadLayer roads = clock.time("read", () -> LayerReaders.read(input, layer.readOptions()));
-        StreetNetwork network = clock.time("network", () -> new NetworkBuilder(snap).build(roads));
-        int depotNode = depot.node(roads, network);
-        List<Finding> findings = clock.time("check", () ->
-                NetworkCheck.run(new CheckInput(roads, network, options, depotNode)));
-        HealthReport report = new HealthReport(input, roads.report(), network, depotNode, options, findings);
+        HealthReport report = HealthCheck.run(new HealthCheck.Request(input, layer.readOptions(), options,
+                depot.position, depot.reach), clock);
+        List<Finding> findings = report.findings();
+        StreetNetwork network = report.network();
         if (out != null) {
             clock.run("write", () -> new FindingGeoJsonWriter().write(out, findings));
         }
