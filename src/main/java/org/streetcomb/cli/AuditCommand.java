@@ -68,14 +68,17 @@ public final class AuditCommand implements Callable<Integer> {
     ScopeOptions scope;
 
     @Option(names = "--streets-out", paramLabel = "FILE", description = "Write every street with its coverage status and share as GeoJSON.")
+    @Writes
     Path streetsOut;
 
     @Option(names = "--missed-out", paramLabel = "FILE", description = "Write the missed parts of streets as GeoJSON lines.")
+    @Writes
     Path missedOut;
 
     @Option(names = "--mop-up", paramLabel = "FILE",
             description = "Plan a tour that services only the missed parts and write it as GeoJSON; --gpx, --kml, "
                     + "--directions and the trip options write the same tour for the field.")
+    @Writes
     Path mopUpOut;
 
     @Option(names = "--mop-up-turn-back",
@@ -85,6 +88,7 @@ public final class AuditCommand implements Callable<Integer> {
 
     @Option(names = "--mop-up-ids", paramLabel = "FILE",
             description = "Write the ids of the streets not covered, one per line, for plan --service-ids.")
+    @Writes
     Path mopUpIds;
 
     @CommandLine.Mixin

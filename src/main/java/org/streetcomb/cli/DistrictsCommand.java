@@ -34,6 +34,7 @@ public final class DistrictsCommand implements Callable<Integer> {
 
     @Option(names = {"-o", "--out"}, paramLabel = "FOLDER", required = true,
             description = "Folder for the per-area folders and summary.csv.")
+    @Writes(folder = true)
     Path out;
 
     @Option(names = "--depot-field", paramLabel = "FIELD",

@@ -28,6 +28,7 @@ import picocli.CommandLine.Option;
 public final class FieldOutputOptions {
 
     @Option(names = "--gpx", paramLabel = "FILE", description = "Write the tours as GPX 1.1 for handheld units.")
+    @Writes
     Path gpx;
 
     @Option(names = "--gpx-simplify", paramLabel = "METRES", defaultValue = "2",
@@ -48,10 +49,12 @@ public final class FieldOutputOptions {
     boolean routes;
 
     @Option(names = "--kml", paramLabel = "FILE", description = "Write the tours as KML 2.2 for globe viewers.")
+    @Writes
     Path kml;
 
     @Option(names = "--directions", paramLabel = "FILE",
             description = "Write a direction sheet: .csv for a table, .html for a printable page.")
+    @Writes
     Path directions;
 
     @Option(names = "--traffic-side", paramLabel = "SIDE", defaultValue = "right",

@@ -54,6 +54,7 @@ public final class HealthCommand implements Callable<Integer> {
     double duplicate;
 
     @Option(names = {"-o", "--out"}, paramLabel = "FILE", description = "Write the findings as a GeoJSON FeatureCollection.")
+    @Writes
     Path out;
 
     @Option(names = "--json", description = "Print the summary as JSON instead of text.")

@@ -37,6 +37,9 @@ public final class Main implements Runnable {
         // a mistake on the command line gets one line and a pointer to the help, not the whole option list
         cli.setParameterExceptionHandler((e, arguments) -> {
             err.println("streetcomb: " + e.getMessage());
+            if (e instanceof OutputGuard.Clash) {
+                return ExitCode.USAGE;
+            }
             CommandLine.UnmatchedArgumentException.printSuggestions(e, err);
             err.println("Try '" + e.getCommandLine().getCommandSpec().qualifiedName() + " --help' for the options.");
             return ExitCode.USAGE;
@@ -53,6 +56,11 @@ public final class Main implements Runnable {
             err.println("streetcomb: internal error, please report it with what follows:");
             e.printStackTrace(err);
             return ExitCode.INTERNAL;
+        });
+        // outputs are checked against inputs and each other before anything is read or written
+        cli.setExecutionStrategy(parsed -> {
+            OutputGuard.check(parsed);
+            return new CommandLine.RunLast().execute(parsed);
         });
         return cli.execute(args);
     }

@@ -35,6 +35,7 @@ public final class PlanCommand implements Callable<Integer> {
     DepotOptions depot;
 
     @Option(names = {"-o", "--out"}, paramLabel = "FILE", description = "Write the tours as a GeoJSON FeatureCollection.")
+    @Writes
     Path out;
 
     @Option(names = "--steps", description = "Also write one GeoJSON feature per step of each tour.")

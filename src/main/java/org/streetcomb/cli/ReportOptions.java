@@ -37,10 +37,12 @@ final class ReportOptions {
     @Option(names = "--report", paramLabel = "FILE.html",
             description = "Write one self-contained HTML page with a map of the result and its summary; it opens "
                     + "from disk with no network.")
+    @Writes
     Path html;
 
     @Option(names = "--quicklook", paramLabel = "FILE.png",
             description = "Write a PNG picture of the same map, of --quicklook-size pixels.")
+    @Writes
     Path png;
 
     @Option(names = "--quicklook-size", paramLabel = "WIDTHxHEIGHT", defaultValue = "1200x800",
