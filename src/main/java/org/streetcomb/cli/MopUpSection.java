@@ -36,6 +36,7 @@ final class MopUpSection {
         json.put("start_node", planned.start());
         json.put("end_node", planned.end());
         json.put("open", planned.start() != planned.end());
+        planned.leftOut().forEach(json.putArray("left_out")::add);
         if (out != null) {
             json.put("output", out.toString());
         }
@@ -47,6 +48,9 @@ final class MopUpSection {
                 plan.serviceLength() / 1000, plan.deadheadLength() / 1000,
                 planned.start() == planned.end() ? "from the depot" : "from the given start",
                 planned.augmentation().method())});
+        for (String leftOut : planned.leftOut()) {
+            lines.add(new String[] {"Warning", "mop-up: " + leftOut + "; the rest is planned"});
+        }
         lines.addAll(field.lines());
         if (out != null) {
             lines.add(new String[] {"Written", out.toString()});

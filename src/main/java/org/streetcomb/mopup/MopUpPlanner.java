@@ -2,6 +2,7 @@ package org.streetcomb.mopup;
 
 import org.streetcomb.coverage.CoverageReport;
 
+import java.util.ArrayList;
 import java.util.List;
 import org.streetcomb.NoTourError;
 import org.streetcomb.network.Components;
@@ -32,7 +33,9 @@ import org.streetcomb.tour.TourValidator;
  * less of it in service. With {@code turnBack} the problem is also solved on the pieces themselves, and the
  * shorter of the two tours is kept.
  * The tour is closed at the depot, or, from a given start (where the crew is now), open and ends at the
- * depot. Streets in parts of the network not connected to the start get a closed tour each.
+ * depot. Streets in parts of the network not connected to the start get a closed tour each. Missed
+ * stretches that one-way streets cut off from the start or the depot are left out and named
+ * ({@link MopUp#leftOut}), and the rest is planned.
  */
 public final class MopUpPlanner {
 
@@ -44,8 +47,14 @@ public final class MopUpPlanner {
      * @param tours         the tours, the start's first
      * @param start         where the first tour starts
      * @param end           where the first tour ends (the depot)
+     * @param leftOut       what was left out because one-way streets cut it off, one line each
      */
-    public record MopUp(PostmanProblem problem, Augmentation augmentation, List<Tour> tours, int start, int end) {
+    public record MopUp(PostmanProblem problem, Augmentation augmentation, List<Tour> tours, int start, int end,
+                        List<String> leftOut) {
+
+        public MopUp {
+            leftOut = List.copyOf(leftOut);
+        }
 
         /** The network the tours run on: the audited one with the mop-up edges cut at their missed stretches. */
         public StreetNetwork network() {
@@ -83,16 +92,22 @@ public final class MopUpPlanner {
         if (through == null) {
             return null;
         }
-        PostmanProblem problem = new PostmanProblem(stretches.network(), stretches.demand(), through.problem().starts(),
-                depot);
+        // the pieces of the whole edges left out (cut off by one-way streets) are left out too
+        int[] parent = stretches.split().parent();
+        boolean[] keep = new boolean[parent.length];
+        for (int p = 0; p < parent.length; p++) {
+            keep[p] = through.problem().demand().needs(parent[p]);
+        }
+        ServiceDemand pieces = stretches.demand().restrictedTo(keep);
+        PostmanProblem problem = new PostmanProblem(stretches.network(), pieces, through.problem().starts(), depot);
         List<Tour> expanded = through.tours().stream().map(stretches::expand).toList();
         validate(problem, expanded);
-        MopUp drivenOn = new MopUp(problem, through.augmentation(), expanded, first, depot);
+        MopUp drivenOn = new MopUp(problem, through.augmentation(), expanded, first, depot, through.leftOut());
         if (!turnBack) {
             return drivenOn;
         }
         // the construction is a heuristic: more freedom does not always give it a shorter tour
-        MopUp turning = solve(stretches.network(), stretches.demand(), depot, first, source);
+        MopUp turning = solve(stretches.network(), pieces, depot, first, source);
         return turning.length() < drivenOn.length() ? turning : drivenOn;
     }
 
@@ -110,10 +125,14 @@ public final class MopUpPlanner {
             throw new NoTourError(source + ": the start is on a part of the network not connected to the depot's");
         }
         int[] starts = TourPlanner.starts(network, components, demand, first, false);
-        PostmanProblem problem = new PostmanProblem(network, demand, starts, depot);
-        ReachabilityCheck.check(problem, source);
+        List<String> leftOut = new ArrayList<>();
+        ServiceDemand reachable = ReachabilityCheck.check(new PostmanProblem(network, demand, starts, depot), source,
+                true, leftOut).demand();
+        PostmanProblem problem = new PostmanProblem(network, reachable,
+                TourPlanner.starts(network, components, reachable, first, false), depot);
         Augmentation augmentation = PostmanVariants.solve(problem);
-        return new MopUp(problem, augmentation, TourPlanner.tours(problem, components, augmentation), first, depot);
+        return new MopUp(problem, augmentation, TourPlanner.tours(problem, components, augmentation), first, depot,
+                leftOut);
     }
 
     /** Checks the tours driven over the pieces as {@link TourPlanner} checks every tour it makes. */
