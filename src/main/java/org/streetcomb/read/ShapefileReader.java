@@ -142,15 +142,32 @@ final class ShapefileReader implements LayerReader {
         return (int) ((size - 100) / 8);
     }
 
+    /**
+     * The character set a .cpg names, or null when it names none (an empty .cpg says nothing, as if there were
+     * none). A name Java does not know, or text that is no name at all, is refused in one line.
+     */
     static Charset charset(Path cpg, String label) throws IOException {
-        String name = Files.readString(cpg, StandardCharsets.US_ASCII).strip();
+        byte[] bytes;
+        try (var in = Files.newInputStream(cpg)) {
+            bytes = in.readNBytes(256); // real .cpg files hold one short name
+        }
+        String name = new String(bytes, StandardCharsets.ISO_8859_1).strip();
+        if (name.isEmpty()) {
+            return null;
+        }
         String windows = name.replaceAll("^(?i)(ansi|cp)[ _]?", "windows-");
         for (String candidate : new String[] {name, windows, "windows-" + name}) {
-            if (Charset.isSupported(candidate)) {
-                return Charset.forName(candidate);
+            try {
+                if (Charset.isSupported(candidate)) {
+                    return Charset.forName(candidate);
+                }
+            } catch (IllegalArgumentException notAName) {
+                // IllegalCharsetNameException: spaces, control characters and the like; try the next reading
             }
         }
-        throw InputError.at(sibling(label, ".cpg"), null, "unknown character encoding '" + name + "'");
+        String shown = name.length() > 40 ? name.substring(0, 40) + "..." : name;
+        throw InputError.at(sibling(label, ".cpg"), null, "unknown character encoding '"
+                + shown.replaceAll("\\p{Cntrl}", "?") + "'");
     }
 
     static Path sidecar(Path shp, String extension, String label) {

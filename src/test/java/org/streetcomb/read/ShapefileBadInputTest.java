@@ -136,6 +136,24 @@ class ShapefileBadInputTest {
     }
 
     @Test
+    void emptyCpgReadsAsIfThereWereNone() throws IOException {
+        // an empty .cpg once ended in an IllegalCharsetNameException and a stack trace
+        Path shp = copy(MESA, "streets");
+        Files.writeString(dir.resolve("streets.cpg"), "\r\n");
+        java.io.StringWriter err = new java.io.StringWriter();
+        int code = org.streetcomb.cli.Main.run(new String[] {"plan", shp.toString(), "--out=" + dir.resolve("t.geojson"),
+                "--crs=EPSG:2223"}, new java.io.PrintWriter(new java.io.StringWriter()), new java.io.PrintWriter(err, true));
+        assertEquals(0, code, err.toString());
+    }
+
+    @Test
+    void cpgNamingNoCharacterSet() throws IOException {
+        Path shp = copy(MESA, "streets");
+        Files.writeString(dir.resolve("streets.cpg"), "not a name\u0001");
+        assertRefused(shp, "streets.cpg: unknown character encoding 'not a name?'", "--crs=EPSG:2223");
+    }
+
+    @Test
     void prjNestedTooDeep() throws IOException {
         // A hostile .prj nested thousands of brackets deep once overflowed the WKT parser's stack
         Path shp = copy(MESA, "streets");
