@@ -166,7 +166,7 @@ public final class DistrictBatch {
         }
         PlanFiles.write(plan, new FieldFiles(folder.resolve("tour.geojson"), false, folder.resolve("tour.gpx"),
                 new GpxLimits(1, GpxLimits.DEFAULT_TRACK_POINTS, GpxLimits.DEFAULT_ROUTE_POINTS, true), null,
-                folder.resolve("directions.html")), new StageClock(StageClock.SILENT));
+                folder.resolve("directions.html"), true), new StageClock(StageClock.SILENT));
     }
 
     private static void writeSummary(Path file, List<Row> rows) {

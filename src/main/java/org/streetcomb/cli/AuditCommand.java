@@ -17,6 +17,7 @@ import org.streetcomb.plan.MopUpRequest;
 import org.streetcomb.plan.Plan;
 import org.streetcomb.plan.PlanFiles;
 import org.streetcomb.plan.PlanScope;
+import org.streetcomb.plan.ScopeRecord;
 import org.streetcomb.plan.ServiceOptions;
 import org.streetcomb.solve.KerbMode;
 import org.streetcomb.timing.StageClock;
@@ -66,6 +67,12 @@ public final class AuditCommand implements Callable<Integer> {
 
     @CommandLine.Mixin
     ScopeOptions scope;
+
+    @Option(names = "--plan", paramLabel = "FILE",
+            description = "The tour GeoJSON that plan --out wrote: audit what that plan asked for (its depot, "
+                    + "--depot-part-only, --leave-out-cut-off, --service-ids and kerbs, which it records), "
+                    + "instead of repeating those options.")
+    Path plan;
 
     @Option(names = "--streets-out", paramLabel = "FILE", description = "Write every street with its coverage status and share as GeoJSON.")
     @Writes
@@ -151,6 +158,9 @@ public final class AuditCommand implements Callable<Integer> {
     @CommandLine.Spec
     CommandLine.Model.CommandSpec spec;
 
+    /** The scope read from --plan, or null. */
+    private PlanScope recorded;
+
     /** The mop-up tour once planned, for the report's map. */
     private Plan mopUpPlan;
 
@@ -171,6 +181,10 @@ public final class AuditCommand implements Callable<Integer> {
             throw new CommandLine.ParameterException(spec.commandLine(), "--doubt-odds must be 1 or more");
         }
         depot.check(spec.commandLine());
+        if (plan != null && (scope.narrowed() || bothKerbs || depot.position != null)) {
+            throw new CommandLine.ParameterException(spec.commandLine(), "--plan brings the plan's depot and scope: "
+                    + "give it without --depot, --depot-part-only, --leave-out-cut-off, --service-ids and --both-kerbs");
+        }
         field.check(spec.commandLine());
         report.validate();
         if (start != null && field.tripOptions.requested()) {
@@ -180,8 +194,13 @@ public final class AuditCommand implements Callable<Integer> {
         MatchSettings settings = new MatchSettings(sigma, radius, beta, maxGap, maxSpeed / 3.6, doubtOdds, driftWindow);
         StageClock clock = new StageClock(TerminalProgress.forCommandLine(quiet, System.err));
         TrackLines seen = new TrackLines();
-        Audit audit = DriveAudit.run(new AuditRequest(layerFile, tracks, layer.snap(), settings, coveredAt, bothKerbs,
-                layer.readOptions(), scope()), clock, report.requested() ? seen : segment -> { });
+        PlanScope asked = scope();
+        if (plan != null) {
+            recorded = asked;
+        }
+        boolean kerbs = recorded != null ? recorded.service().kerbs() != KerbMode.ONE_PASS : bothKerbs;
+        Audit audit = DriveAudit.run(new AuditRequest(layerFile, tracks, layer.snap(), settings, coveredAt, kerbs,
+                layer.readOptions(), asked), clock, report.requested() ? seen : segment -> { });
         if (streetsOut != null) {
             clock.run("write streets", () -> CoverageGeoJsonWriter.writeStreets(streetsOut, audit.coverage()));
         }
@@ -225,6 +244,9 @@ public final class AuditCommand implements Callable<Integer> {
 
     /** What the plan asked for, when any of the plan's scope options is given; null audits every required street. */
     private PlanScope scope() {
+        if (plan != null) {
+            return ScopeRecord.read(plan);
+        }
         if (!scope.narrowed()) {
             return null;
         }
@@ -239,12 +261,13 @@ public final class AuditCommand implements Callable<Integer> {
     /** Plans the mop-up tour and writes it; returns its part of the summary. */
     private PlanSummary.Section mopUp(Audit audit, StageClock clock) {
         MopUpPlanning.Result planned = MopUpPlanning.plan(audit,
-                new MopUpRequest(depot.position, start, depot.reach, turnBack, field.arrangement()), clock);
+                new MopUpRequest(recorded != null ? recorded.depot() : depot.position, start,
+                        recorded != null ? recorded.depotReach() : depot.reach, turnBack, field.arrangement()), clock);
         if (planned == null) {
             return MopUpSection.nothing();
         }
         mopUpPlan = planned.plan();
-        PlanFiles.Written written = PlanFiles.write(mopUpPlan, field.files(mopUpOut, true), clock, "write mop-up");
+        PlanFiles.Written written = PlanFiles.write(mopUpPlan, field.files(mopUpOut, true, false), clock, "write mop-up");
         return MopUpSection.of(mopUpPlan, planned.planned(), field.section(mopUpPlan, written), mopUpOut);
     }
 

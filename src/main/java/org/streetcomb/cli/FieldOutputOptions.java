@@ -91,10 +91,13 @@ public final class FieldOutputOptions {
         return new Arrangement(side, !plainOrder, tripOptions.request());
     }
 
-    /** The files to write, with the tours' GeoJSON at {@code tours} (null for none). */
-    FieldFiles files(Path tours, boolean steps) {
+    /**
+     * The files to write, with the tours' GeoJSON at {@code tours} (null for none), keeping the plan's scope
+     * in it when {@code recordScope}.
+     */
+    FieldFiles files(Path tours, boolean steps, boolean recordScope) {
         return new FieldFiles(tours, steps, gpx, new GpxLimits(simplify, trackPoints, routePoints, routes), kml,
-                directions);
+                directions, recordScope);
     }
 
     /** Whether any file for the field was asked for. */

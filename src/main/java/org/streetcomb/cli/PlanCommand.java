@@ -79,7 +79,7 @@ public final class PlanCommand implements Callable<Integer> {
         Plan plan = Planner.plan(new PlanRequest(input, depot.position, snap, depot.reach, service.scope.depotOnly, layer.readOptions(),
                 service.options(spec.commandLine()).withArea(area.area(spec.commandLine())), field.arrangement()),
                 repair.options(), clock);
-        PlanFiles.Written written = PlanFiles.write(plan, field.files(out, steps), clock);
+        PlanFiles.Written written = PlanFiles.write(plan, field.files(out, steps, true), clock);
         PlanSummary.Section fieldSection = field.section(plan, written);
         PlanSummary summary = PlanSummary.of(plan, clock.stages(), out);
         summary.add(fieldSection);

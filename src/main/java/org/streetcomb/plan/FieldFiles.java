@@ -12,6 +12,13 @@ import org.streetcomb.write.GpxLimits;
  * @param gpxLimits  simplification and point limits for GPX and KML
  * @param kml        KML 2.2 for globe viewers
  * @param directions a direction sheet, .csv or .html (one per vehicle, as GPX)
+ * @param recordScope keep the plan's scope in the tours' GeoJSON ({@link ScopeRecord}), for the audit
  */
-public record FieldFiles(Path tours, boolean steps, Path gpx, GpxLimits gpxLimits, Path kml, Path directions) {
+public record FieldFiles(Path tours, boolean steps, Path gpx, GpxLimits gpxLimits, Path kml, Path directions,
+                         boolean recordScope) {
+
+    /** The files without the scope record (a mop-up, say). */
+    public FieldFiles(Path tours, boolean steps, Path gpx, GpxLimits gpxLimits, Path kml, Path directions) {
+        this(tours, steps, gpx, gpxLimits, kml, directions, false);
+    }
 }

@@ -45,7 +45,8 @@ public final class PlanFiles {
     public static Written write(Plan plan, FieldFiles files, StageClock clock, String toursStage) {
         List<Tour> tours = plan.tours();
         if (files.tours() != null) {
-            clock.run(toursStage, () -> new TourGeoJsonWriter(files.steps()).write(files.tours(), plan.network(), tours));
+            clock.run(toursStage, () -> new TourGeoJsonWriter(files.steps()).write(files.tours(), plan.network(), tours,
+                    files.recordScope() ? ScopeRecord.MEMBER : null, files.recordScope() ? ScopeRecord.of(plan) : null));
         }
         EdgeBearings bearings = EdgeBearings.of(plan.network());
         List<List<Direction>> sheets = new ArrayList<>();

@@ -3,6 +3,8 @@ package org.streetcomb.write;
 import com.fasterxml.jackson.core.JsonEncoding;
 import com.fasterxml.jackson.core.JsonFactory;
 import com.fasterxml.jackson.core.JsonGenerator;
+import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.ObjectMapper;
 import java.io.IOException;
 import java.nio.file.Path;
 
@@ -22,11 +24,24 @@ public final class FeatureCollectionFile {
     }
 
     public static void write(Path target, Features features) {
+        write(target, null, null, features);
+    }
+
+    /**
+     * Writes a collection with a foreign member (RFC 7946 section 6.1) before its features: {@code name}
+     * holding {@code value}; none when {@code name} is null.
+     */
+    public static void write(Path target, String name, JsonNode value, Features features) {
         AtomicFile.write(target, out -> {
             try (JsonGenerator json = new JsonFactory().createGenerator(out, JsonEncoding.UTF8)
                     .enable(JsonGenerator.Feature.WRITE_BIGDECIMAL_AS_PLAIN)) {
+                json.setCodec(new ObjectMapper());
                 json.writeStartObject();
                 json.writeStringField("type", "FeatureCollection");
+                if (name != null) {
+                    json.writeFieldName(name);
+                    json.writeTree(value);
+                }
                 json.writeArrayFieldStart("features");
                 features.write(json);
                 json.writeEndArray();

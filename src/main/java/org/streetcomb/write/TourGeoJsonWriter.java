@@ -1,6 +1,7 @@
 package org.streetcomb.write;
 
 import com.fasterxml.jackson.core.JsonGenerator;
+import com.fasterxml.jackson.databind.JsonNode;
 import java.io.IOException;
 import java.math.BigDecimal;
 import java.math.RoundingMode;
@@ -25,7 +26,12 @@ public final class TourGeoJsonWriter {
     }
 
     public void write(Path target, StreetNetwork network, List<Tour> tours) {
-        FeatureCollectionFile.write(target, json -> {
+        write(target, network, tours, null, null);
+    }
+
+    /** As {@link #write(Path, StreetNetwork, List)}, with a foreign member {@code name} (none when null). */
+    public void write(Path target, StreetNetwork network, List<Tour> tours, String name, JsonNode value) {
+        FeatureCollectionFile.write(target, name, value, json -> {
             for (int t = 0; t < tours.size(); t++) {
                 writeTour(json, network, tours.get(t), t + 1);
             }

@@ -53,7 +53,7 @@ class PlanPipelineTest {
         assertNotNull(plan.arranged().fleet(), "the trips are planned by the pipeline, not by the command line");
         PlanFiles.write(plan, new FieldFiles(java.resolve("tour.geojson"), false, java.resolve("tour.gpx"),
                 new GpxLimits(2, GpxLimits.DEFAULT_TRACK_POINTS, GpxLimits.DEFAULT_ROUTE_POINTS, false),
-                java.resolve("tour.kml"), java.resolve("sheet.csv")), clock);
+                java.resolve("tour.kml"), java.resolve("sheet.csv"), true), clock);
 
         for (String name : List.of("tour.geojson", "tour.gpx", "sheet.csv", "tour.kml")) {
             assertArrayEquals(Files.readAllBytes(cli.resolve(name)), Files.readAllBytes(java.resolve(name)), name);
