@@ -428,15 +428,23 @@ public final class HmmMapMatcher {
             Layer b = chain.get(k);
             Moves moves = b.moves;
             for (int m = 0; m < moves.size; m++) {
-                if (moves.score[m] + rest[k][moves.to[m]] >= best - settings.margin() - ROUNDING) {
-                    credit(chain.get(k - 1), moves.from[m], b, moves.to[m], moves.kind[m], driven);
+                double whole = moves.score[m] + rest[k][moves.to[m]];
+                if (whole >= best - settings.margin() - ROUNDING) {
+                    // a drive that is only believable, not the most probable, is credited where it went legally:
+                    // a wrong-way metre is reported only where the most probable drive went against the arrows
+                    credit(chain.get(k - 1), moves.from[m], b, moves.to[m], moves.kind[m], driven,
+                            whole < best - ROUNDING);
                 }
             }
         }
     }
 
-    /** Records the stretch from state i of a to state j of b, by the way the move went. */
-    private void credit(Layer a, int i, Layer b, int j, byte how, DrivenIntervals driven) {
+    /**
+     * Records the stretch from state i of a to state j of b, by the way the move went; with {@code legalOnly},
+     * only what it drove in the permitted direction.
+     */
+    private void credit(Layer a, int i, Layer b, int j, byte how, DrivenIntervals all, boolean legalOnly) {
+        Credit driven = new Credit(all, legalOnly);
         if (how == ON) {
             driven.add(a.edge[i], a.along[i], a.offset[i], b.offset[j]);
             return;
@@ -473,6 +481,29 @@ public final class HmmMapMatcher {
             driven.add(eb, true, 0, b.offset[j]);
         } else {
             driven.add(eb, false, b.offset[j], network.length(eb));
+        }
+    }
+
+    /** The driven intervals, optionally keeping only what was driven in a street's permitted direction. */
+    private final class Credit {
+        private final DrivenIntervals driven;
+        private final boolean legalOnly;
+
+        Credit(DrivenIntervals driven, boolean legalOnly) {
+            this.driven = driven;
+            this.legalOnly = legalOnly;
+        }
+
+        void add(int edge, boolean along, double from, double to) {
+            if (!legalOnly || legal(network, edge, along)) {
+                driven.add(edge, along, from, to);
+            }
+        }
+
+        void addWhole(int edge, boolean along) {
+            if (!legalOnly || legal(network, edge, along)) {
+                driven.addWhole(edge, along);
+            }
         }
     }
 }
