@@ -50,7 +50,8 @@ import org.streetcomb.read.Travel;
  * navigation: not "which way did it go" but "could it have gone here". Where the track cannot tell, in a
  * dropout beside a loop or between two fixes at the mouth of a short dead end, the single best path picks
  * one way arbitrarily and reports the other as missed; a street 20 m beside the driven one, which the fixes
- * speak against, stays uncredited.
+ * speak against, stays uncredited. A drive that is only believable is credited where it went legally: wrong-way
+ * metres, an accusation, come from the most probable drive alone.
  *
  * <p>Written by hand: no library on Maven Central matches against a network of our own arrays. Cost per
  * fix pair: one bounded Dijkstra search per distinct exit node of the previous fix's states, plus
