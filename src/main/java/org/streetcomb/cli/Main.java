@@ -4,6 +4,7 @@ import java.io.PrintWriter;
 import org.streetcomb.ExitCode;
 import org.streetcomb.InputError;
 import org.streetcomb.NoTourError;
+import org.streetcomb.write.AtomicFile;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
 
@@ -57,10 +58,19 @@ public final class Main implements Runnable {
             e.printStackTrace(err);
             return ExitCode.INTERNAL;
         });
-        // outputs are checked against inputs and each other before anything is read or written
+        // outputs are checked against inputs and each other before anything is read or written, and moved into
+        // place together only when the command has written them all
         cli.setExecutionStrategy(parsed -> {
             OutputGuard.check(parsed);
-            return new CommandLine.RunLast().execute(parsed);
+            try (AtomicFile.Batch outputs = AtomicFile.batch()) {
+                int code = new CommandLine.RunLast().execute(parsed);
+                try {
+                    outputs.commit();
+                } catch (InputError e) {
+                    throw new CommandLine.ExecutionException(cli, e.getMessage(), e);
+                }
+                return code;
+            }
         });
         return cli.execute(args);
     }

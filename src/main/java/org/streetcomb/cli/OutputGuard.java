@@ -11,6 +11,7 @@ import java.util.Collection;
 import java.util.List;
 import java.util.Locale;
 import java.util.regex.Pattern;
+import org.streetcomb.InputError;
 import picocli.CommandLine;
 import picocli.CommandLine.Model.ArgSpec;
 import picocli.CommandLine.Model.OptionSpec;
@@ -103,15 +104,29 @@ final class OutputGuard {
         return paths;
     }
 
-    /** Refuses an output that exists and is not what it should be (a plain file, or a folder). */
+    /**
+     * Refuses an output that exists and is not what it should be (a plain file, or a folder), or whose folder
+     * is missing or read-only: found before any work, so no other output is written first.
+     */
     private static void checkKind(CommandLine line, Arg out) {
         Path path = out.path();
         if (out.folder()) {
             if (Files.exists(path) && !Files.isDirectory(path)) {
                 throw new Clash(line, out.name() + " " + path + " is not a folder");
             }
+            Path existing = path.toAbsolutePath();
+            while (existing != null && !Files.exists(existing)) {
+                existing = existing.getParent();
+            }
+            writable(line, out, existing);
             return;
         }
+        Path folder = path.toAbsolutePath().getParent();
+        if (folder == null || !Files.isDirectory(folder)) {
+            throw new CommandLine.ExecutionException(line, "missing folder", InputError.at(path, null,
+                    "cannot write: folder " + folder + " does not exist (given as " + out.name() + ")"));
+        }
+        writable(line, out, folder);
         if (Files.isSymbolicLink(path)) {
             throw new Clash(line, out.name() + " " + path + " is a symbolic link: name the file it points to, "
                     + "or another file");
@@ -119,6 +134,13 @@ final class OutputGuard {
         if (Files.exists(path, LinkOption.NOFOLLOW_LINKS) && !Files.isRegularFile(path, LinkOption.NOFOLLOW_LINKS)) {
             throw new Clash(line, out.name() + " " + path + " is not a plain file ("
                     + (Files.isDirectory(path) ? "a folder" : "a pipe or device") + "): choose a file to write");
+        }
+    }
+
+    private static void writable(CommandLine line, Arg out, Path folder) {
+        if (folder != null && !Files.isWritable(folder)) {
+            throw new CommandLine.ExecutionException(line, "read-only folder", InputError.at(out.path(), null,
+                    "cannot write: folder " + folder + " is not writable (given as " + out.name() + ")"));
         }
     }
 

@@ -2,7 +2,6 @@ package org.streetcomb.read;
 
 import java.nio.file.Path;
 import java.sql.Connection;
-import java.sql.DriverManager;
 import java.sql.ResultSet;
 import java.sql.ResultSetMetaData;
 import java.sql.SQLException;
@@ -12,7 +11,6 @@ import java.util.Arrays;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
-import java.util.Properties;
 import org.locationtech.jts.geom.Coordinate;
 import org.locationtech.jts.geom.Envelope;
 import org.locationtech.jts.geom.Geometry;
@@ -22,7 +20,6 @@ import org.locationtech.jts.geom.MultiLineString;
 import org.locationtech.jts.geom.PrecisionModel;
 import org.locationtech.jts.io.ParseException;
 import org.locationtech.jts.io.WKBReader;
-import org.sqlite.SQLiteConfig;
 import org.streetcomb.InputError;
 
 /**
@@ -55,10 +52,7 @@ final class GeoPackageReader implements LayerReader {
 
     @Override
     public RoadLayer read(Path file) {
-        SQLiteConfig config = new SQLiteConfig();
-        config.setReadOnly(true);
-        Properties properties = config.toProperties();
-        try (Connection db = DriverManager.getConnection("jdbc:sqlite:" + file.toAbsolutePath(), properties);
+        try (Connection db = GeoPackageConnection.open(file);
              Statement sql = db.createStatement()) {
             String[] layer = lineLayer(sql, file, options.layer());
             String table = layer[0];

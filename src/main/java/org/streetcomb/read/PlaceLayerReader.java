@@ -8,7 +8,6 @@ import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.sql.Connection;
-import java.sql.DriverManager;
 import java.sql.ResultSet;
 import java.sql.ResultSetMetaData;
 import java.sql.SQLException;
@@ -29,7 +28,6 @@ import org.locationtech.jts.geom.GeometryFactory;
 import org.locationtech.jts.geom.LinearRing;
 import org.locationtech.jts.geom.Polygon;
 import org.locationtech.jts.geom.PrecisionModel;
-import org.sqlite.SQLiteConfig;
 import org.streetcomb.InputError;
 
 /**
@@ -287,9 +285,7 @@ public final class PlaceLayerReader {
     // ---- GeoPackage
 
     private static List<Place> geoPackage(Path file, String crs, String wanted) {
-        SQLiteConfig config = new SQLiteConfig();
-        config.setReadOnly(true);
-        try (Connection db = DriverManager.getConnection("jdbc:sqlite:" + file.toAbsolutePath(), config.toProperties());
+        try (Connection db = GeoPackageConnection.open(file);
              Statement sql = db.createStatement()) {
             List<String[]> tables = new ArrayList<>();
             try (ResultSet rs = sql.executeQuery("SELECT g.table_name, g.column_name, g.srs_id FROM gpkg_contents c "

@@ -176,6 +176,21 @@ class OutputGuardTest {
     }
 
     @Test
+    void missingReportFolderLeavesNoOtherOutput() throws IOException {
+        // the GeoJSON, GPX, KML and CSV were once written before the missing folder was found
+        Map<Path, String> before = hashes();
+        StringWriter err = new StringWriter();
+        int code = Main.run(new String[] {"plan", roads.toString(), "--out=" + at("t.geojson"), "--gpx=" + at("t.gpx"),
+            "--kml=" + at("t.kml"), "--directions=" + at("t.csv"), "--report=" + at("missing/r.html")},
+                new PrintWriter(new StringWriter()), new PrintWriter(err, true));
+        assertEquals(ExitCode.BAD_INPUT, code, err.toString());
+        assertEquals(1, err.toString().lines().count(), err.toString());
+        assertTrue(err.toString().contains("r.html: cannot write: folder " + at("missing") + " does not exist (given as --report)"),
+                err.toString());
+        assertEquals(before, hashes());
+    }
+
+    @Test
     void outputsBesideTheInputArePlanned() throws IOException {
         StringWriter err = new StringWriter();
         List<String> args = new ArrayList<>(List.of("plan", roads.toString(), "--out=" + at("tour.geojson"),

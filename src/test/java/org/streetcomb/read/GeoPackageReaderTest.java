@@ -44,6 +44,27 @@ class GeoPackageReaderTest {
                         .collect(Collectors.toSet()));
     }
 
+    @Test
+    void readingAWalModeGeoPackageLeavesNothingBeside() throws Exception {
+        // a copy of the fixture switched to write-ahead-log mode by the SQLite JDBC driver; read-only opening
+        // once left streets.gpkg-wal and streets.gpkg-shm beside it
+        Path gpkg = dir.resolve("streets.gpkg");
+        Files.copy(MESA, gpkg);
+        try (var db = java.sql.DriverManager.getConnection("jdbc:sqlite:" + gpkg);
+             var sql = db.createStatement(); var rs = sql.executeQuery("PRAGMA journal_mode=WAL")) {
+            assertEquals("wal", rs.getString(1));
+        }
+        assertEquals(java.util.List.of(gpkg), java.util.List.of(Files.list(dir).toArray()));
+        byte[] before = Files.readAllBytes(gpkg);
+        int features = LayerReaders.read(gpkg).report().featuresRead();
+        assertEquals(LayerReaders.read(MESA).report().featuresRead(), features);
+        PlaceLayerReader.read(gpkg, null, null);
+        try (var files = Files.list(dir)) {
+            assertEquals(java.util.List.of(gpkg), files.toList());
+        }
+        assertTrue(java.util.Arrays.equals(before, Files.readAllBytes(gpkg)));
+    }
+
     /**
      * A GeoPackage with two line layers (two parts of the Mesa streets, split by ogr2ogr, see NOTICE):
      * --layer reads the one named, with the feature count and length ogrinfo gives for that table.
