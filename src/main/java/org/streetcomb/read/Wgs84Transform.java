@@ -38,6 +38,8 @@ import org.streetcomb.InputError;
  * srs_id 4326 in GeoPackages) is recognised from its text and needs no transformation: SIS would spend
  * seconds starting its EPSG database to reach the same answer. Coordinates are then taken as longitude,
  * latitude whatever axis order the definition states, as the shapefile and GeoPackage formats store them.
+ * Any other definition is resolved once and remembered by {@link CrsOperationCache}, so later runs skip
+ * the EPSG database search (seconds) and parse the stored chain of formulas (milliseconds).
  */
 final class Wgs84Transform {
 
@@ -83,7 +85,17 @@ final class Wgs84Transform {
         if (PLAIN_WGS84.matcher(compact).matches()) {
             return plainLonLat();
         }
-        return to(fromWkt(wkt, file), minX, minY, maxX, maxY, file);
+        return cached("wkt " + wkt, minX, minY, maxX, maxY, () -> to(fromWkt(wkt, file), minX, minY, maxX, maxY, file));
+    }
+
+    /** Resolves a definition once per text and extent ({@link CrsOperationCache}); the accuracy check runs first. */
+    private static Wgs84Transform cached(String definition, double minX, double minY, double maxX, double maxY,
+                                         java.util.function.Supplier<Wgs84Transform> resolve) {
+        CrsOperationCache.Entry entry = CrsOperationCache.get(definition, minX, minY, maxX, maxY, () -> {
+            Wgs84Transform t = resolve.get();
+            return new CrsOperationCache.Entry(t.transform, t.description);
+        });
+        return new Wgs84Transform(entry.transform(), entry.description());
     }
 
     /** The transformation for the CRS the user gave with --crs ("EPSG:code" or a file holding WKT). */
@@ -96,7 +108,8 @@ final class Wgs84Transform {
             // WKT in a file or on the command line is taken exactly as a .prj holding the same text would be
             return forWkt(optionWkt(crs), origin, minX, minY, maxX, maxY);
         }
-        return to(fromOption(crs), minX, minY, maxX, maxY, origin);
+        return cached("option " + crs.strip().toUpperCase(Locale.ROOT), minX, minY, maxX, maxY,
+                () -> to(fromOption(crs), minX, minY, maxX, maxY, origin));
     }
 
     private static Wgs84Transform plainLonLat() {
@@ -251,6 +264,11 @@ final class Wgs84Transform {
             coords[i] = new Coordinate(lon, lat);
         }
         return coords;
+    }
+
+    /** The transformation itself (null for plain longitude/latitude). */
+    MathTransform mathTransform() {
+        return transform;
     }
 
     /** The source CRS and the accuracy of the datum shift, for the read report. */
