@@ -24,7 +24,8 @@ import org.streetcomb.timing.StageClock;
  * Plans a tour of a generated street grid and prints one Markdown table row: edges, odd nodes, time per
  * stage, peak heap, and the ratio of JGraphT's {@link ChinesePostman} time to our solve time on the same
  * network when it finishes within the time limit. Run one size per JVM (docs/bench.sh) so peak heap is
- * that size's alone. Usage: PlanBenchmark EDGES [REFERENCE_LIMIT_SECONDS], 0 to skip the reference.
+ * that size's alone. Usage: PlanBenchmark EDGES|LAYER [REFERENCE_LIMIT_SECONDS], 0 to skip the reference; given a
+ * layer file (docs/bench/make_grid.py --town writes one) it plans that instead of generating the easy grid.
  */
 public final class PlanBenchmark {
 
@@ -32,11 +33,13 @@ public final class PlanBenchmark {
     }
 
     public static void main(String[] args) throws Exception {
-        int edges = Integer.parseInt(args[0]);
         int limit = args.length > 1 ? Integer.parseInt(args[1]) : 120;
-        Path dir = Files.createTempDirectory("streetcomb-bench");
-        Path layer = dir.resolve("grid.geojson");
-        GridLayer.write(layer, edges, 42);
+        boolean given = !args[0].matches("\\d+");
+        Path dir = given ? null : Files.createTempDirectory("streetcomb-bench");
+        Path layer = given ? Path.of(args[0]) : dir.resolve("grid.geojson");
+        if (!given) {
+            GridLayer.write(layer, Integer.parseInt(args[0]), 42);
+        }
         System.gc();
         ManagementFactory.getMemoryPoolMXBeans().forEach(MemoryPoolMXBean::resetPeakUsage);
 
@@ -51,15 +54,18 @@ public final class PlanBenchmark {
 
         String reference = limit > 0 ? referenceRatio(plan.network(), plan.augmentation().deadhead(), solve, limit)
                 : "not run (O(n^3) at this size)";
-        StringBuilder row = new StringBuilder(String.format(Locale.ROOT, "| %,d | %,d |", plan.network().edgeCount(),
-                plan.augmentation().oddNodes()));
+        StringBuilder row = new StringBuilder(String.format(Locale.ROOT, "| %,d | %,d (%.2f) |", plan.network().edgeCount(),
+                plan.augmentation().oddNodes(), plan.augmentation().oddNodes() / (double) plan.network().nodeCount()));
         for (StageClock.Stage stage : clock.stages()) {
             row.append(String.format(Locale.ROOT, " %.2f |", stage.seconds()));
         }
         row.append(String.format(Locale.ROOT, " %.2f | %,d | %s |", total, peak >> 20, reference));
         System.out.println(row);
-        Files.deleteIfExists(layer);
-        Files.deleteIfExists(dir);
+        System.err.println(plan.augmentation().method());
+        if (!given) {
+            Files.deleteIfExists(layer);
+            Files.deleteIfExists(dir);
+        }
     }
 
     /** JGraphT's ChinesePostman on the same edges; its time divided by ours, or why there is none. */
