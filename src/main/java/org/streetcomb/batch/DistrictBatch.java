@@ -13,6 +13,7 @@ import java.util.concurrent.Future;
 import java.util.concurrent.atomic.AtomicInteger;
 import java.util.function.Consumer;
 import org.locationtech.jts.geom.Geometry;
+import org.streetcomb.SafeText;
 import org.streetcomb.InputError;
 import org.streetcomb.NoTourError;
 import org.streetcomb.check.RepairOptions;
@@ -181,9 +182,6 @@ public final class DistrictBatch {
     }
 
     private static String field(String value) {
-        String safe = value.startsWith("=") || value.startsWith("+") || value.startsWith("-") || value.startsWith("@")
-                ? "'" + value : value;
-        return safe.contains(",") || safe.contains("\"") || safe.contains("\n")
-                ? "\"" + safe.replace("\"", "\"\"") + "\"" : safe;
+        return SafeText.csvField(value);
     }
 }

@@ -31,7 +31,10 @@ public final class Main implements Runnable {
     }
 
     /** Runs the command line with the given streams and returns the exit code. */
-    public static int run(String[] args, PrintWriter out, PrintWriter err) {
+    public static int run(String[] args, PrintWriter stdout, PrintWriter stderr) {
+        // input data reach the terminal only with their control characters made visible
+        PrintWriter out = new PrintWriter(new TerminalSafeWriter(stdout), true);
+        PrintWriter err = new PrintWriter(new TerminalSafeWriter(stderr), true);
         CommandLine cli = new CommandLine(new Main());
         cli.setOut(out);
         cli.setErr(err);

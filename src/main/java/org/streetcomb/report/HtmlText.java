@@ -1,5 +1,7 @@
 package org.streetcomb.report;
 
+import org.streetcomb.SafeText;
+
 /**
  * Escapes text for HTML. Every string that comes from input data or the command line (street names, ids,
  * file names, option values) passes through here or through the JSON escapes of {@link HtmlReportWriter}
@@ -12,6 +14,7 @@ final class HtmlText {
 
     /** Text safe in element content and in double- or single-quoted attribute values. */
     static String escape(String text) {
+        text = SafeText.xml(text);
         StringBuilder out = new StringBuilder(text.length() + 16);
         for (int i = 0; i < text.length(); i++) {
             char c = text.charAt(i);

@@ -8,6 +8,7 @@ import java.nio.charset.StandardCharsets;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.Locale;
+import org.streetcomb.SafeText;
 import org.streetcomb.tour.Direction;
 
 /**
@@ -100,15 +101,12 @@ public final class DirectionSheetWriter {
     }
 
     private static String csvField(String value) {
-        if (value.contains(",") || value.contains("\"") || value.contains("\n") || value.contains("\r")) {
-            return "\"" + value.replace("\"", "\"\"") + "\"";
-        }
-        return value;
+        return SafeText.csvField(value);
     }
 
     static String escape(String text) {
         StringBuilder b = new StringBuilder(text.length());
-        for (char c : text.toCharArray()) {
+        for (char c : SafeText.xml(text).toCharArray()) {
             switch (c) {
                 case '<' -> b.append("&lt;");
                 case '>' -> b.append("&gt;");

@@ -8,6 +8,7 @@ import io.jenetics.jpx.WayPoint;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.Locale;
+import org.streetcomb.SafeText;
 import org.streetcomb.network.StreetNetwork;
 import org.streetcomb.tour.Direction;
 import org.streetcomb.tour.Tour;
@@ -41,7 +42,7 @@ public final class GpxTourWriter {
     public Written write(Path target, StreetNetwork network, int depot, List<Tour> tours,
                          List<List<Direction>> directions, String label) {
         GPX.Builder gpx = GPX.builder().creator(CREATOR)
-                .metadata(m -> m.name(label + "s from " + target.getFileName()).desc(FieldCaution.TEXT));
+                .metadata(m -> m.name(SafeText.xml(label + "s from " + target.getFileName())).desc(FieldCaution.TEXT));
         int waypoints = 1;
         gpx.addWayPoint(WayPoint.builder().name("Depot").desc("Depot. " + FieldCaution.TEXT)
                 .build(network.lat(depot), longitude(network.lon(depot))));
@@ -68,7 +69,7 @@ public final class GpxTourWriter {
                             .desc(description(network, tours.get(t), label, t));
                     for (Direction d : lines.subList(from, to)) {
                         route.addPoint(WayPoint.builder().name(String.format(Locale.ROOT, "%03d", d.number()))
-                                .desc(d.instruction()).build(network.lat(d.node()), longitude(network.lon(d.node()))));
+                                .desc(SafeText.xml(d.instruction())).build(network.lat(d.node()), longitude(network.lon(d.node()))));
                     }
                     gpx.addRoute(route.build());
                     routePoints += to - from;
@@ -121,7 +122,7 @@ public final class GpxTourWriter {
     }
 
     private static String streetName(Direction d) {
-        return d.street().isEmpty() ? "an unnamed street" : d.street();
+        return d.street().isEmpty() ? "an unnamed street" : SafeText.xml(d.street());
     }
 
     /** GPX longitudes lie in [-180, 180): the antimeridian is written as -180. */

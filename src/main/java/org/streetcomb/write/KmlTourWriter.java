@@ -6,6 +6,7 @@ import java.util.Locale;
 import javax.xml.stream.XMLOutputFactory;
 import javax.xml.stream.XMLStreamException;
 import javax.xml.stream.XMLStreamWriter;
+import org.streetcomb.SafeText;
 import org.streetcomb.network.StreetNetwork;
 import org.streetcomb.tour.Tour;
 
@@ -77,7 +78,7 @@ public final class KmlTourWriter {
 
     private static void element(XMLStreamWriter xml, String name, String text) throws XMLStreamException {
         xml.writeStartElement(name);
-        xml.writeCharacters(text);
+        xml.writeCharacters(SafeText.xml(text));
         xml.writeEndElement();
     }
 }
