@@ -85,8 +85,9 @@ final class ShapefileReader implements LayerReader {
                     for (double[] xy : shape.parts()) {
                         addLine(lines, xy, toWgs84, tally, label, shape.number());
                     }
-                    mapping.keep(String.valueOf(shape.number()), properties, lines, tally,
-                            label + ": record " + shape.number());
+                    // the id is the FID desktop GIS shows (GDAL counts features from 0; the format's records from 1)
+                    mapping.keep(String.valueOf(shape.number() - 1), properties, lines, tally,
+                            label + ": feature " + (shape.number() - 1));
                 }
             }
             if (shapes.recordsRead() != indexed) {
@@ -110,7 +111,7 @@ final class ShapefileReader implements LayerReader {
             tally.skip("line part with fewer than 2 points");
             return;
         }
-        Coordinate[] coords = toWgs84.lonLat(xy, n, label, "record " + record);
+        Coordinate[] coords = toWgs84.lonLat(xy, n, label, "feature " + (record - 1));
         lines.add(GEOMETRY.createLineString(coords));
     }
 

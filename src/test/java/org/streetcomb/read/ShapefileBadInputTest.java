@@ -77,7 +77,7 @@ class ShapefileBadInputTest {
     @Test
     void costFieldWithoutAValue() throws IOException {
         Path shp = copy(MESA, "streets");
-        assertRefused(shp, "streets.shp: record 1: cost field MINUTES holds nothing", "--crs=EPSG:2223", "--cost-field=MINUTES");
+        assertRefused(shp, "streets.shp: feature 0: cost field MINUTES holds nothing", "--crs=EPSG:2223", "--cost-field=MINUTES");
     }
 
     @Test
