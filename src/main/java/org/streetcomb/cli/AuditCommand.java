@@ -52,7 +52,7 @@ public final class AuditCommand implements Callable<Integer> {
             "When you check streets on the ground, obey traffic law and road signs, and never handle a phone, "
                     + "tablet or GPS unit while driving.");
 
-    @Parameters(index = "0", paramLabel = "LAYER", description = "Road centrelines (the same layer the tour was planned on).")
+    @Parameters(index = "0", paramLabel = "LAYER", description = "Road centrelines, the same layer the tour was planned on: GeoJSON, a shapefile (or a .zip holding one), a GeoPackage (.gpkg) or OpenStreetMap.")
     Path layerFile;
 
     @Parameters(index = "1..*", arity = "1..*", paramLabel = "TRACK", description = "GPX files of the drive (tracks, any number of segments and days).")

@@ -32,7 +32,7 @@ import picocli.CommandLine.Parameters;
             "Exit code 0 when nothing blocks a tour, 4 when something does, 3 when the layer cannot be read."})
 public final class HealthCommand implements Callable<Integer> {
 
-    @Parameters(index = "0", paramLabel = "LAYER", description = "Road centrelines: GeoJSON (.geojson, .json) or a shapefile (.shp, or a .zip holding one).")
+    @Parameters(index = "0", paramLabel = "LAYER", description = "Road centrelines: GeoJSON (.geojson, .json), a shapefile (.shp, or a .zip holding one), a GeoPackage (.gpkg) or OpenStreetMap (.osm, .osm.gz, .osm.bz2, .osm.pbf).")
     Path input;
 
     @CommandLine.Mixin

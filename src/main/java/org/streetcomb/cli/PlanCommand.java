@@ -28,7 +28,7 @@ import picocli.CommandLine.Parameters;
                 + "route against local rules and your own risk assessment; map data may be out of date."})
 public final class PlanCommand implements Callable<Integer> {
 
-    @Parameters(index = "0", paramLabel = "LAYER", description = "Road centrelines: GeoJSON (.geojson, .json), a shapefile (.shp, or a .zip holding one) or OpenStreetMap (.osm, .osm.gz, .osm.bz2, .osm.pbf).")
+    @Parameters(index = "0", paramLabel = "LAYER", description = "Road centrelines: GeoJSON (.geojson, .json), a shapefile (.shp, or a .zip holding one), a GeoPackage (.gpkg) or OpenStreetMap (.osm, .osm.gz, .osm.bz2, .osm.pbf).")
     Path input;
 
     @CommandLine.Mixin
