@@ -74,7 +74,8 @@ public final class PlanFiles {
             for (int[] range : groups) {
                 Path file = fileOf(files.directions(), range);
                 List<List<Direction>> mine = sheets.subList(range[0], range[1]);
-                clock.run("directions", () -> DirectionSheetWriter.write(file, mine, label));
+                // the streets left out go on every sheet: each crew should know they are not forgotten
+                clock.run("directions", () -> DirectionSheetWriter.write(file, mine, label, leftOut(plan)));
                 written.add(new SheetFile(file, mine.stream().mapToInt(List::size).sum()));
             }
         }
@@ -111,6 +112,21 @@ public final class PlanFiles {
     /** The file for one group: the file asked for, or one per vehicle when there are several vehicles. */
     private static Path fileOf(Path asked, int[] group) {
         return group[2] == 0 ? asked : perVehicle(asked, group[2]);
+    }
+
+    /** The streets one-way streets cut off, by feature id, in the order of their first edge. */
+    static List<DirectionSheetWriter.LeftOut> leftOut(Plan plan) {
+        java.util.Map<String, double[]> metres = new java.util.LinkedHashMap<>();
+        java.util.Map<String, String> names = new java.util.HashMap<>();
+        for (int e : plan.leftOut()) {
+            org.streetcomb.read.RoadFeature f = plan.network().feature(e);
+            metres.computeIfAbsent(f.id(), id -> new double[1])[0] += plan.network().length(e);
+            names.putIfAbsent(f.id(), f.name() == null || f.name().isBlank() ? "(unnamed)" : f.name());
+        }
+        List<DirectionSheetWriter.LeftOut> list = new ArrayList<>();
+        metres.forEach((id, m) -> list.add(new DirectionSheetWriter.LeftOut(names.get(id), id, m[0],
+                "cut off by one-way streets")));
+        return list;
     }
 
     /** {@code name.ext} becomes {@code name-vehicle-N.ext}: one file per vehicle. */

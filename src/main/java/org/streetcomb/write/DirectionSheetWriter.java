@@ -34,19 +34,32 @@ public final class DirectionSheetWriter {
         return name.endsWith(".html") || name.endsWith(".htm") ? true : null;
     }
 
+    /**
+     * A street the plan was asked for but left out, listed at the end of the sheet so a crew knows it is not
+     * forgotten: its name, feature id, length in metres and why.
+     */
+    public record LeftOut(String street, String feature, double metres, String why) {
+    }
+
     /** @param sheets each tour's directions, in tour order */
     public static void write(Path target, List<List<Direction>> sheets, String label) {
+        write(target, sheets, label, List.of());
+    }
+
+    /** As {@link #write(Path, List, String)}, listing the streets left out after the tours. */
+    public static void write(Path target, List<List<Direction>> sheets, String label, List<LeftOut> leftOut) {
         boolean html = Boolean.TRUE.equals(isHtml(target));
         AtomicFile.write(target, out -> {
             if (html) {
-                html(out, sheets, label, target.getFileName().toString());
+                html(out, sheets, label, target.getFileName().toString(), leftOut);
             } else {
-                csv(out, sheets);
+                csv(out, sheets, leftOut);
             }
         });
     }
 
-    private static void csv(OutputStream stream, List<List<Direction>> sheets) throws IOException {
+    private static void csv(OutputStream stream, List<List<Direction>> sheets, List<LeftOut> leftOut)
+            throws IOException {
         Writer out = new OutputStreamWriter(stream, StandardCharsets.UTF_8);
         out.write(csvField("Caution: " + FieldCaution.TEXT) + "\r\n");
         out.write(String.join(",", COLUMNS) + "\r\n");
@@ -56,11 +69,15 @@ public final class DirectionSheetWriter {
                         + metres(d.metres()) + "," + metres(d.cumulative()) + "," + pass(d) + "\r\n");
             }
         }
+        for (LeftOut street : leftOut) {
+            out.write("left out,," + csvField("Not planned: " + street.why() + " (feature " + street.feature() + ")")
+                    + "," + csvField(street.street()) + "," + metres(street.metres()) + ",,left out\r\n");
+        }
         out.flush();
     }
 
-    private static void html(OutputStream stream, List<List<Direction>> sheets, String label, String title)
-            throws IOException {
+    private static void html(OutputStream stream, List<List<Direction>> sheets, String label, String title,
+                             List<LeftOut> leftOut) throws IOException {
         Writer out = new OutputStreamWriter(stream, StandardCharsets.UTF_8);
         out.write("<!DOCTYPE html>\n<html lang=\"en\">\n<head>\n<meta charset=\"utf-8\">\n<title>"
                 + escape("Directions: " + title) + "</title>\n<style>\n"
@@ -85,6 +102,20 @@ public final class DirectionSheetWriter {
                         + String.format(Locale.ROOT, "%.0f", d.metres()) + "</td><td class=\"n\">"
                         + String.format(Locale.ROOT, "%.2f", d.cumulative() / 1000) + "</td><td>"
                         + (d.steps() == 0 ? "" : pass(d)) + "</td></tr>\n");
+            }
+            out.write("</tbody>\n</table>\n");
+        }
+        if (!leftOut.isEmpty()) {
+            double total = leftOut.stream().mapToDouble(LeftOut::metres).sum();
+            out.write(String.format(Locale.ROOT, "<h2>Left out: %d street%s, %.2f km</h2>%n", leftOut.size(),
+                    leftOut.size() == 1 ? "" : "s", total / 1000));
+            out.write("<p>Asked for but not in this plan; service them another way or report them.</p>\n"
+                    + "<table>\n<thead><tr><th>Street</th><th>Feature</th><th>Length (m)</th><th>Why</th></tr></thead>\n"
+                    + "<tbody>\n");
+            for (LeftOut street : leftOut) {
+                out.write("<tr><td>" + escape(street.street()) + "</td><td>" + escape(street.feature())
+                        + "</td><td class=\"n\">" + String.format(Locale.ROOT, "%.0f", street.metres()) + "</td><td>"
+                        + escape(street.why()) + "</td></tr>\n");
             }
             out.write("</tbody>\n</table>\n");
         }
