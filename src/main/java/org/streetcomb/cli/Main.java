@@ -75,7 +75,18 @@ public final class Main implements Runnable {
                 return code;
             }
         });
-        return cli.execute(args);
+        try {
+            return cli.execute(args);
+        } catch (StackOverflowError e) {
+            // last resort: readers bound nesting themselves, so this is a bug; still one line, not a trace
+            err.println("streetcomb: internal error: the input is nested too deeply to handle (out of stack); "
+                    + "please report it with the input");
+            return ExitCode.INTERNAL;
+        } catch (OutOfMemoryError e) {
+            err.println("streetcomb: out of memory (" + Runtime.getRuntime().maxMemory() / (1 << 20) + " MB heap): "
+                    + "give Java more with JAVA_TOOL_OPTIONS=-Xmx8g, or plan a smaller extract");
+            return ExitCode.INTERNAL;
+        }
     }
 
     @Override

@@ -1,8 +1,12 @@
 package org.streetcomb.plan;
 
 import java.io.IOException;
+import java.nio.ByteBuffer;
+import java.nio.charset.CharacterCodingException;
+import java.nio.charset.CodingErrorAction;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
+import java.nio.file.Path;
 import java.util.HashSet;
 import java.util.List;
 import java.util.Locale;
@@ -73,17 +77,16 @@ final class PostmanSetup {
             }
             return required;
         }
+        Path file = request.service().serviceIds();
         Set<String> ids = new HashSet<>();
-        try {
-            for (String line : Files.readAllLines(request.service().serviceIds(), StandardCharsets.UTF_8)) {
-                String id = line.strip();
-                if (!id.isEmpty() && !id.startsWith("#")) {
-                    ids.add(id);
-                }
+        for (String line : idLines(file)) {
+            String id = line.strip();
+            if (!id.isEmpty() && !id.startsWith("#")) {
+                ids.add(id);
             }
-        } catch (IOException e) {
-            throw new InputError(request.service().serviceIds() + ": cannot read the list of street ids ("
-                    + e.getMessage() + ")");
+        }
+        if (ids.isEmpty()) {
+            throw InputError.at(file, null, "holds no street ids (one per line; # starts a comment)");
         }
         Set<String> matched = new HashSet<>();
         for (int e = 0; e < required.length; e++) {
@@ -93,10 +96,39 @@ final class PostmanSetup {
                 matched.add(id);
             }
         }
+        if (matched.isEmpty()) {
+            String example = ids.stream().sorted().findFirst().orElse("");
+            throw InputError.at(file, null, "none of its " + ids.size() + " ids matches a feature id of "
+                    + request.input().getFileName() + " (for example '" + example + "'; the layer's ids look like '"
+                    + (required.length == 0 ? "" : network.feature(0).id()) + "')");
+        }
         if (matched.size() < ids.size()) {
             warnings.add((ids.size() - matched.size()) + " of the " + ids.size() + " ids in "
                     + request.service().serviceIds().getFileName() + " match no street of the layer");
         }
         return required;
+    }
+
+    /** The lines of an id list, refused in words when it is not UTF-8 text (binary, or UTF-16 from an editor). */
+    private static List<String> idLines(Path file) {
+        byte[] bytes;
+        try {
+            bytes = Files.readAllBytes(file);
+        } catch (IOException e) {
+            throw InputError.at(file, null, "cannot read the list of street ids (" + InputError.inWords(e) + ")");
+        }
+        for (int i = 0; i < bytes.length; i++) {
+            if (bytes[i] == 0) {
+                throw InputError.at(file, "byte " + (i + 1), "not a text file of ids (a zero byte: binary, or "
+                        + "UTF-16 text); save it as UTF-8 text, one id per line");
+            }
+        }
+        try {
+            String text = StandardCharsets.UTF_8.newDecoder().onMalformedInput(CodingErrorAction.REPORT)
+                    .onUnmappableCharacter(CodingErrorAction.REPORT).decode(ByteBuffer.wrap(bytes)).toString();
+            return text.replace("\uFEFF", "").lines().toList();
+        } catch (CharacterCodingException e) {
+            throw InputError.at(file, null, "not UTF-8 text; save the list of ids as UTF-8, one id per line");
+        }
     }
 }

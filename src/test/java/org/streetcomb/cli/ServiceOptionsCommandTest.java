@@ -100,11 +100,31 @@ class ServiceOptionsCommandTest {
     }
 
     @Test
-    void noStreetToServiceIsNoTour() throws IOException {
+    void idsMatchingNoStreetAreNamedAsSuch() throws IOException {
+        // once "no street is marked to be serviced", which did not say why
         Path ids = dir.resolve("ids.txt");
-        Files.writeString(ids, "no-such-street\n");
+        Files.writeString(ids, "no-such-street\nnor-this\n");
         PlanCommandTest.Run run = PlanCommandTest.run("plan", DEMO, "--service-ids", ids.toString());
-        assertEquals(ExitCode.NO_TOUR, run.code());
-        assertTrue(run.err().contains("no street is marked to be serviced"), run.err());
+        assertEquals(ExitCode.BAD_INPUT, run.code());
+        assertTrue(run.err().contains("ids.txt: none of its 2 ids matches a feature id of brackenford.geojson "
+                + "(for example 'no-such-street'; the layer's ids look like 'bf-"), run.err());
+    }
+
+    @Test
+    void idFilesThatAreNotUtf8TextAreRefusedInWords() throws IOException {
+        // UTF-16 (as some editors save) and binary files once gave "(Input length = 1)"
+        Path utf16 = dir.resolve("utf16.txt");
+        Files.writeString(utf16, "bf-001\n", java.nio.charset.StandardCharsets.UTF_16);
+        Path latin = dir.resolve("latin.txt");
+        Files.write(latin, new byte[] {'b', 'f', (byte) 0xE9, '\n'});
+        Path empty = Files.writeString(dir.resolve("empty.txt"), "# nothing yet\n");
+        String[][] cases = {{utf16.toString(), "utf16.txt: byte 3: not a text file of ids"},
+            {latin.toString(), "latin.txt: not UTF-8 text"}, {empty.toString(), "empty.txt: holds no street ids"}};
+        for (String[] c : cases) {
+            PlanCommandTest.Run run = PlanCommandTest.run("plan", DEMO, "--service-ids", c[0]);
+            assertEquals(ExitCode.BAD_INPUT, run.code(), run.err());
+            assertEquals(1, run.err().lines().count(), run.err());
+            assertTrue(run.err().contains(c[1]), run.err());
+        }
     }
 }
