@@ -57,6 +57,21 @@ public record Plan(PlanRequest request, ReadReport read, StreetNetwork network, 
                 warnings, leftOut, how);
     }
 
+    @Override
+    public int vehicleOf(int tour) {
+        if (!hasTrips() || arranged.fleet().vehicles().size() < 2) {
+            return 0;
+        }
+        int from = 0;
+        for (int v = 0; v < arranged.fleet().vehicles().size(); v++) {
+            from += arranged.fleet().vehicles().get(v).trips().size();
+            if (tour < from) {
+                return v + 1;
+            }
+        }
+        return 0;
+    }
+
     /** Whether the tours are trips of a fleet (then written and labelled as trips). */
     public boolean hasTrips() {
         return arranged != null && arranged.fleet() != null;

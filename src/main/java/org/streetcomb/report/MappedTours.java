@@ -19,6 +19,11 @@ public interface MappedTours {
         return new int[0];
     }
 
+    /** The vehicle (from 1) that drives a tour when a fleet of several vehicles was planned, else 0. */
+    default int vehicleOf(int tour) {
+        return 0;
+    }
+
     /** The area the streets were serviced in, or null for the whole layer. */
     default ServiceArea area() {
         return null;

@@ -92,15 +92,29 @@ public final class PlanLayers {
         return new PlanLayers(plan).layers();
     }
 
-    /** One group per tour, so each tour can be shown alone. */
+    /**
+     * One group per tour, so each tour can be shown alone; with a fleet of several vehicles, titled by vehicle
+     * and trip and coloured by vehicle, so each vehicle's area reads as one colour.
+     */
     public static List<MapGroup> groups(MappedTours plan) {
         String noun = noun(plan);
         List<MapGroup> groups = new ArrayList<>();
+        int trip = 0;
         for (int t = 0; t < plan.tours().size(); t++) {
             double km = plan.tours().get(t).length(plan.network()) / 1000;
-            groups.add(new MapGroup(groupId(t), String.format(Locale.ROOT, "%s %d (%.2f km)", noun, t + 1, km), tourColour(t)));
+            int vehicle = plan.vehicleOf(t);
+            trip = t > 0 && vehicle == plan.vehicleOf(t - 1) ? trip + 1 : 1;
+            String title = vehicle > 0 ? String.format(Locale.ROOT, "Vehicle %d, trip %d (%.2f km)", vehicle, trip, km)
+                    : String.format(Locale.ROOT, "%s %d (%.2f km)", noun, t + 1, km);
+            groups.add(new MapGroup(groupId(t), title, colour(plan, t)));
         }
         return groups;
+    }
+
+    /** A tour's colour: its own, or its vehicle's when a fleet of several vehicles was planned. */
+    static String colour(MappedTours plan, int tour) {
+        int vehicle = plan.vehicleOf(tour);
+        return tourColour(vehicle > 0 ? vehicle - 1 : tour);
     }
 
     /**
@@ -310,7 +324,7 @@ public final class PlanLayers {
             details.put("Length (m)", metres(length));
             String label = String.format(Locale.ROOT, "%s %d, step %s: %s (%s)", noun, tour + 1, steps(), name,
                     service ? "service" : "deadhead");
-            return new MapFeature(new double[][] {line}, groupId(tour), service ? tourColour(tour) : null, label, details);
+            return new MapFeature(new double[][] {line}, groupId(tour), service ? colour(plan, tour) : null, label, details);
         }
 
         MapFeature label(int tour) {

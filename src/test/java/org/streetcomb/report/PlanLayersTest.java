@@ -86,6 +86,29 @@ class PlanLayersTest {
         }
     }
 
+    /** Demo data (the invented town): two vehicles, trips of at most 8 km. */
+    @Test
+    void aFleetsTripsAreTitledByVehicleAndColouredByIt() {
+        org.streetcomb.plan.FleetRequest two = new org.streetcomb.plan.FleetRequest(8.0, null, 2, null, null, null,
+                null, null, List.of(), 10, 30, null);
+        Plan fleet = Planner.plan(new PlanRequest(Path.of("fixtures/demo/brackenford.geojson"), new LonLat(-31.2, 44.6),
+                0.5, 500, false, org.streetcomb.read.ReadOptions.DEFAULTS, org.streetcomb.plan.ServiceOptions.DEFAULTS,
+                new org.streetcomb.plan.Arrangement(org.streetcomb.tour.TrafficSide.RIGHT, true, two)),
+                new StageClock(StageClock.SILENT));
+        List<org.streetcomb.report.MapGroup> groups = PlanLayers.groups(fleet);
+        assertEquals(fleet.tours().size(), groups.size());
+        assertTrue(groups.get(0).title().startsWith("Vehicle 1, trip 1 ("), groups.get(0).title());
+        java.util.Map<Integer, String> colours = new java.util.HashMap<>();
+        for (int t = 0; t < groups.size(); t++) {
+            int vehicle = fleet.vehicleOf(t);
+            assertTrue(vehicle == 1 || vehicle == 2, "trip " + t);
+            String before = colours.putIfAbsent(vehicle, groups.get(t).colour());
+            assertTrue(before == null || before.equals(groups.get(t).colour()), "one colour per vehicle");
+        }
+        assertEquals(2, colours.size());
+        assertTrue(!colours.get(1).equals(colours.get(2)), "the vehicles differ in colour");
+    }
+
     @Test
     void chevronPointsTheWayTheLineRuns() {
         // a line due east: the tip is at its middle and both strokes lie west of it, one north, one south
