@@ -45,6 +45,7 @@ final class DbfAttributes implements Closeable {
         this.label = label;
         this.declared = declared;
         this.fallback = languageDriverCharset(file);
+        checkLengths(file, label);
         InputStream in = new BufferedInputStream(Files.newInputStream(file), 1 << 16);
         try {
             this.reader = new DBFReader(in, StandardCharsets.ISO_8859_1);
@@ -55,6 +56,48 @@ final class DbfAttributes implements Closeable {
         names = new String[reader.getFieldCount()];
         for (int i = 0; i < names.length; i++) {
             names[i] = decodeStrict(reader.getField(i).getName(), StandardCharsets.UTF_8, "field name " + (i + 1));
+        }
+    }
+
+    /**
+     * Checks the lengths the dBase header states (bytes 4-11: record count, header length, record length)
+     * against the field list and the file's real size before any record is read: a header that lies about
+     * them shifts every record, and the reader then returns blank or garbled attributes without complaint.
+     */
+    private static void checkLengths(Path file, String label) throws IOException {
+        long size = Files.size(file);
+        if (size < 33) {
+            throw InputError.at(label, null, "not a readable .dbf table: " + size + " bytes is too short for its header");
+        }
+        byte[] head;
+        try (InputStream in = Files.newInputStream(file)) {
+            head = in.readNBytes((int) Math.min(size, 32 + 32 * 256 + 1 + 263));
+        }
+        java.nio.ByteBuffer b = java.nio.ByteBuffer.wrap(head).order(java.nio.ByteOrder.LITTLE_ENDIAN);
+        long records = Integer.toUnsignedLong(b.getInt(4));
+        int headerLength = Short.toUnsignedInt(b.getShort(8));
+        int recordLength = Short.toUnsignedInt(b.getShort(10));
+        int end = 32;
+        int fields = 1; // the deletion flag that starts every record
+        while (end < head.length && head[end] != 0x0D) {
+            if (end + 32 > head.length) {
+                throw InputError.at(label, null, "not a readable .dbf table: the field list has no end mark");
+            }
+            fields += Byte.toUnsignedInt(head[end + 16]);
+            end += 32;
+        }
+        if (headerLength < end + 1) {
+            throw InputError.at(label, "header", "states a header of " + headerLength + " bytes, but its field list "
+                    + "runs to byte " + (end + 1) + ": the header is damaged");
+        }
+        if (recordLength != fields) {
+            throw InputError.at(label, "header", "states records of " + recordLength + " bytes, but its fields add up "
+                    + "to " + fields + ": the header is damaged");
+        }
+        if (headerLength + records * recordLength > size) {
+            throw InputError.at(label, "header", "states " + records + " records of " + recordLength + " bytes after a "
+                    + headerLength + "-byte header, " + (headerLength + records * recordLength) + " bytes in all, but "
+                    + "the file holds " + size + ": truncated or damaged");
         }
     }
 

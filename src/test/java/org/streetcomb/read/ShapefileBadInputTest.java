@@ -153,6 +153,29 @@ class ShapefileBadInputTest {
         assertRefused(shp, "streets.cpg: unknown character encoding 'not a name?'", "--crs=EPSG:2223");
     }
 
+    /** The .dbf with a little-endian 16-bit value at {@code offset} of its header replaced. */
+    private Path dbfWith(int offset, int delta) throws IOException {
+        Path shp = dir.resolve("streets.shp");
+        if (!Files.exists(shp)) {
+            copy(MESA, "streets");
+        }
+        Path dbf = dir.resolve("streets.dbf");
+        byte[] bytes = Files.readAllBytes(MESA.resolve("streets.dbf"));
+        java.nio.ByteBuffer b = java.nio.ByteBuffer.wrap(bytes).order(java.nio.ByteOrder.LITTLE_ENDIAN);
+        b.putShort(offset, (short) (Short.toUnsignedInt(b.getShort(offset)) + delta));
+        Files.write(dbf, bytes);
+        return shp;
+    }
+
+    @Test
+    void dbfHeaderLyingAboutItsLength() throws IOException {
+        // dBase header bytes 8-9 (header length) and 10-11 (record length), as the ESRI shapefile description's
+        // dBase table uses them; a lie once gave every street the name '' and exit 0
+        assertRefused(dbfWith(8, 64), "streets.dbf: header: states", "--crs=EPSG:2223");
+        assertRefused(dbfWith(8, -32), "but its field list runs to byte", "--crs=EPSG:2223");
+        assertRefused(dbfWith(10, 7), "but its fields add up to", "--crs=EPSG:2223");
+    }
+
     @Test
     void prjNestedTooDeep() throws IOException {
         // A hostile .prj nested thousands of brackets deep once overflowed the WKT parser's stack
