@@ -154,7 +154,7 @@ public final class PlanLayers {
             }
         }
         List<MapLayer> layers = new ArrayList<>();
-        layers.add(new MapLayer("service", "Service passes", "streets driven to service them, in the colour of their " + noun.toLowerCase(Locale.ROOT),
+        layers.add(new MapLayer("service", "Service passes", "streets driven to service them, in the colour of their " + (plan.vehicleOf(0) > 0 ? "vehicle" : noun.toLowerCase(Locale.ROOT)),
                 MapLayer.Kind.LINES, MapStyle.solid(TOUR_COLOURS[0], 4, 0.85), true, service));
         layers.add(new MapLayer("deadhead", "Deadhead passes", "streets driven again without servicing",
                 MapLayer.Kind.LINES, new MapStyle(DEADHEAD_COLOUR, 6, 1, "3 6"), true, deadhead));
