@@ -71,7 +71,7 @@ final class ShapefileReader implements LayerReader {
                 throw InputError.at(sibling(label, ".dbf"), null, "holds " + attributes.recordCount()
                         + " records but the .shp index (.shx) holds " + indexed + ": the files do not belong together");
             }
-            Wgs84Transform toWgs84 = toWgs84(prj, label, shapes.minX(), shapes.minY(), shapes.maxX(), shapes.maxY());
+            Wgs84Transform toWgs84 = toWgs84(prj, label, shapes.minX(), shapes.minY(), shapes.maxX(), shapes.maxY(), tally);
             for (ShpLineReader.Shape shape; (shape = shapes.next()) != null; ) {
                 if (shape.number() > indexed) {
                     break;
@@ -115,9 +115,14 @@ final class ShapefileReader implements LayerReader {
         lines.add(GEOMETRY.createLineString(coords));
     }
 
-    private Wgs84Transform toWgs84(Path prj, String label, double minX, double minY, double maxX, double maxY) {
+    private Wgs84Transform toWgs84(Path prj, String label, double minX, double minY, double maxX, double maxY,
+                                   ReadTally tally) {
         if (options.crs() != null) {
-            return Wgs84Transform.forOption(options.crs(), minX, minY, maxX, maxY);
+            Wgs84Transform chosen = Wgs84Transform.forOption(options.crs(), minX, minY, maxX, maxY);
+            if (prj != null) {
+                noteDisagreement(chosen, prj, label, minX, minY, maxX, maxY, tally);
+            }
+            return chosen;
         }
         if (prj == null) {
             throw InputError.at(label, null, "no .prj file says which coordinate reference system the layer uses: "
@@ -128,6 +133,35 @@ final class ShapefileReader implements LayerReader {
                     minX, minY, maxX, maxY);
         } catch (IOException e) {
             throw InputError.at(sibling(label, ".prj"), null, "cannot read: " + e.getMessage());
+        }
+    }
+
+    /**
+     * --crs takes precedence over the .prj, but not silently: when the two put the middle of the layer more
+     * than a kilometre apart, the read report says so (a wrong --crs otherwise shows only as a puzzling
+     * failure later, such as no street of positive length after noding).
+     */
+    private void noteDisagreement(Wgs84Transform chosen, Path prj, String label, double minX, double minY,
+                                  double maxX, double maxY, ReadTally tally) {
+        Wgs84Transform stated;
+        try {
+            stated = Wgs84Transform.forWkt(Files.readString(prj, StandardCharsets.ISO_8859_1), sibling(label, ".prj"),
+                    minX, minY, maxX, maxY);
+        } catch (IOException | InputError unusable) {
+            return; // a .prj that cannot be used is what --crs is for
+        }
+        double[] a = {(minX + maxX) / 2, (minY + maxY) / 2};
+        double[] b = a.clone();
+        try {
+            chosen.transform(a, 1);
+            stated.transform(b, 1);
+        } catch (InputError outside) {
+            return;
+        }
+        double km = Math.hypot((a[0] - b[0]) * Math.cos(Math.toRadians((a[1] + b[1]) / 2)), a[1] - b[1]) * 111.32;
+        if (!(km <= 1)) {
+            tally.note(String.format(java.util.Locale.ROOT, "--crs %s overrides the .prj, which puts the layer's "
+                    + "middle %.0f km away; check which is right", options.crs(), km));
         }
     }
 

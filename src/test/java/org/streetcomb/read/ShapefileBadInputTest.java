@@ -177,6 +177,16 @@ class ShapefileBadInputTest {
     }
 
     @Test
+    void crsThatDisagreesWithThePrjIsNoted() throws IOException {
+        // the .prj is NAD83 / Arizona Central (US feet); UTM zone 12N metres puts the streets in the Pacific
+        Path shp = copy(MESA, "streets");
+        assertEquals(java.util.List.of(), LayerReaders.read(shp, ReadOptions.DEFAULTS.withCrs("EPSG:2223")).report().notes()
+                .keySet().stream().filter(n -> n.contains("overrides")).toList());
+        String notes = String.join("; ", LayerReaders.read(shp, ReadOptions.DEFAULTS.withCrs("EPSG:32612")).report().notes().keySet());
+        org.junit.jupiter.api.Assertions.assertTrue(notes.contains("--crs EPSG:32612 overrides the .prj, which puts the layer's middle "), notes);
+    }
+
+    @Test
     void prjNestedTooDeep() throws IOException {
         // A hostile .prj nested thousands of brackets deep once overflowed the WKT parser's stack
         Path shp = copy(MESA, "streets");
