@@ -28,8 +28,14 @@ import org.streetcomb.read.Travel;
  * connected parts of the network once the streets whose LP traversals exceed their service passes by more
  * than a threshold are kept; the streets across such a set have (nearly) no spare traversals, so an odd
  * set gives a cut violated by nearly one. The LP is re-solved after each round of cuts (GLOP, the simplex
- * code of OR-Tools: dual simplex, warm-started from the last basis after rows are added) until no cut is found or the round or
- * time budget ends; every round's optimum is a valid bound, and the bound only grows.
+ * code of OR-Tools: dual simplex, warm-started from the last basis after rows are added) until no cut is found or the work
+ * budget ends; every round's optimum is a valid bound, and the bound only grows.
+ *
+ * <p>Determinism: the budget is counted in work, never in time ({@link Limits}: rounds, cuts added per round,
+ * simplex iterations over all rounds; a solve cut short by the iteration budget is dropped and the last completed
+ * round counts), so the same input gives the same bound and traversals on any machine and under any load. A wall
+ * clock is kept only as a safety net far above what the work budget takes; when it fires the result says so
+ * ({@link Result#stoppedByClock}) and the bound's description names it, because the plan may then differ between runs.
  *
  * <p>Why a library: a dual simplex with warm starts after added rows is a large, well-kept piece of code
  * (OR-Tools, Apache-2.0); the separation is ours because it is specific to the problem. Complexity: per
@@ -37,6 +43,17 @@ import org.streetcomb.read.Travel;
  * separation over a few thresholds.
  */
 public final class MixedLpBound {
+
+    /**
+     * Work limits for the cutting planes.
+     *
+     * @param rounds        LP solves at most
+     * @param cutsPerRound  violated cuts added per round at most (the first found: tightest threshold, lowest node id)
+     * @param iterations    simplex iterations over all rounds at most
+     * @param safetySeconds wall-clock safety net; reaching it makes the result machine-dependent, and says so
+     */
+    public record Limits(int rounds, int cutsPerRound, long iterations, double safetySeconds) {
+    }
 
     /** Slack thresholds for the separation: a street with more spare traversals joins the two sides. */
     private static final double[] THRESHOLDS = {1e-6, 0.25, 0.5, 0.75};
@@ -50,11 +67,15 @@ public final class MixedLpBound {
      * @param cuts    odd-cut inequalities added
      * @param rounds  LP solves
      * @param integral whether the final LP solution is integral (then, if connected, it is an optimal tour)
+     * @param iterations simplex iterations over all rounds
+     * @param stoppedByClock whether the wall-clock safety net, not the work budget, ended the rounds
      */
-    public record Result(double bound, double[] along, double[] against, int cuts, int rounds, boolean integral) {
+    public record Result(double bound, double[] along, double[] against, int cuts, int rounds, boolean integral,
+                         long iterations, boolean stoppedByClock) {
 
         public String describe() {
-            return "LP relaxation with " + cuts + " odd cuts";
+            return "LP relaxation with " + cuts + " odd cuts"
+                    + (stoppedByClock ? ", stopped by the wall-clock safety net (may differ between runs)" : "");
         }
     }
 
@@ -62,17 +83,16 @@ public final class MixedLpBound {
     }
 
     /**
-     * Solves the relaxation with cuts for at most {@code seconds} (the last completed LP counts) and at most
-     * {@code maxRounds} rounds; null when the LP solver cannot be loaded or fails, so callers keep their
-     * combinatorial bound.
+     * Solves the relaxation with cuts within the work {@code limits} (the last completed LP counts); null when
+     * the LP solver cannot be loaded or fails, so callers keep their combinatorial bound.
      */
-    public static Result solve(PostmanProblem problem, double seconds, int maxRounds) {
+    public static Result solve(PostmanProblem problem, Limits limits) {
         try {
             Loader.loadNativeLibraries();
         } catch (UnsatisfiedLinkError | RuntimeException e) {
             return null;
         }
-        long deadline = System.nanoTime() + (long) (seconds * 1e9);
+        long deadline = System.nanoTime() + (long) (limits.safetySeconds() * 1e9);
         StreetNetwork network = problem.network();
         ServiceDemand demand = problem.demand();
         int n = network.nodeCount();
@@ -138,16 +158,23 @@ public final class MixedLpBound {
             double bound = Double.NEGATIVE_INFINITY;
             int cuts = 0;
             int rounds = 0;
+            long iterations = 0;
             boolean integral = false;
+            boolean clock = false;
             Set<String> seen = new HashSet<>();
-            while (rounds < maxRounds) {
+            while (rounds < limits.rounds() && iterations < limits.iterations()) {
                 double left = (deadline - System.nanoTime()) / 1e9;
-                if (rounds > 0 && left <= 0) {
+                if (left <= 0) {
+                    clock = true;
                     break;
                 }
-                solver.setTimeLimit(Math.max(1000, (long) (left * 1000)));
+                solver.setTimeLimit((long) (left * 1000) + 1);
+                solver.setSolverSpecificParametersAsString(
+                        "max_number_of_iterations: " + (limits.iterations() - iterations));
                 MPSolver.ResultStatus status = solver.solve(params);
+                iterations += solver.iterations();
                 if (status != MPSolver.ResultStatus.OPTIMAL) {
+                    clock = System.nanoTime() >= deadline;
                     break;
                 }
                 rounds++;
@@ -160,10 +187,11 @@ public final class MixedLpBound {
                 }
                 integral = isIntegral(a) && isIntegral(b);
                 List<int[]> found = separate(problem, passes, a, b, seen);
-                if (found.isEmpty()) {
+                if (found.isEmpty() || rounds == limits.rounds()) {
                     break;
                 }
-                for (int[] crossing : found) {
+                for (int[] crossing : found.subList(0, Math.min(found.size(), limits.cutsPerRound()))) {
+                    seen.add(Arrays.toString(crossing));
                     int rhs = 1;
                     MPConstraint cut = solver.makeConstraint(0, Double.POSITIVE_INFINITY);
                     for (int e : crossing) {
@@ -176,13 +204,13 @@ public final class MixedLpBound {
                         }
                     }
                     cut.setLb(rhs);
+                    cuts++;
                 }
-                cuts += found.size();
             }
             if (rounds == 0) {
                 return null;
             }
-            return new Result(bound, a, b, cuts, rounds, integral);
+            return new Result(bound, a, b, cuts, rounds, integral, iterations, clock);
         } finally {
             solver.delete();
         }
@@ -198,14 +226,15 @@ public final class MixedLpBound {
     }
 
     /**
-     * Odd sets whose cut the LP solution violates, each given as the edges across it; {@code seen} holds the
-     * cuts already added (keyed by their edges) so none is added twice.
+     * Odd sets whose cut the LP solution violates, each given as the edges across it, in a fixed order (threshold,
+     * then node id); {@code seen} holds the cuts already added (keyed by their edges) and those are skipped.
      */
     static List<int[]> separate(PostmanProblem problem, int[] passes, double[] a, double[] b, Set<String> seen) {
         StreetNetwork network = problem.network();
         int n = network.nodeCount();
         int m = network.edgeCount();
         List<int[]> cuts = new ArrayList<>();
+        Set<String> found = new HashSet<>();
         int openStart = problem.open() ? problem.starts()[0] : -1;
         int openEnd = problem.open() ? problem.end() : -1;
         for (double threshold : THRESHOLDS) {
@@ -284,7 +313,8 @@ public final class MixedLpBound {
                 }
             }
             for (int[] edges : crossing) {
-                if (seen.add(Arrays.toString(edges))) {
+                String key = Arrays.toString(edges);
+                if (!seen.contains(key) && found.add(key)) {
                     cuts.add(edges);
                 }
             }

@@ -33,7 +33,7 @@ import org.streetcomb.read.Travel;
  * </ol>
  * Lower bound: the largest of the undirected relaxation (service plus a minimum-cost pairing of odd nodes,
  * one-way restrictions ignored), the INOUTDEGREE flow (service plus the flow's cost, parity relaxed) and
- * the LP relaxation with odd cuts ({@link MixedLpBound}, up to {@link #LP_MAX_EDGES} streets); the method
+ * the LP relaxation with odd cuts ({@link MixedLpBound}, up to {@link #LP_MAX_EDGES} streets, within the work budget {@link #LP_LIMITS}); the method
  * string names the one used. Where the tour meets the bound it is reported optimal.
  */
 public final class MixedPostman implements PostmanSolver {
@@ -44,13 +44,18 @@ public final class MixedPostman implements PostmanSolver {
     /** Flip trials are also limited to this many edge-solves in all, so large networks stay fast. */
     static final int FLIP_WORK = 100_000;
 
-    /** Time and rounds for the LP bound's cutting planes. */
-    static final double LP_SECONDS = 10;
-    static final int LP_ROUNDS = 5000;
+    /**
+     * Work budget for the LP bound's cutting planes, in work and not in time so that a plan is the same on any
+     * machine ({@link MixedLpBound.Limits}). Every real extract of docs/quality.md ends its rounds within it
+     * (at most 62 rounds, 1,526 simplex iterations); whole Baltimore (3,811 streets) reaches the round limit at a
+     * 0.83 % certified gap (321 rounds to the end gave 0.85 %), a generated 10,000-street grid needed 155 rounds
+     * and 16,862 iterations to the end. The two-minute clock is a safety net only.
+     */
+    static final MixedLpBound.Limits LP_LIMITS = new MixedLpBound.Limits(150, 2_000, 100_000, 120);
 
     /**
      * Larger networks skip the LP: on a generated 100,000-street grid its first solve did not finish in
-     * {@link #LP_SECONDS} (at 30,000 it did, giving a 0.43 % ceiling).
+     * 10 s (at 30,000 it did, giving a 0.43 % ceiling).
      */
     static final int LP_MAX_EDGES = 50_000;
 
@@ -104,7 +109,7 @@ public final class MixedPostman implements PostmanSolver {
         Oriented oriented = inOutDegree(problem, along, against, demand.either());
         evenParity(network, oriented);
         orientAlongTrails(network, oriented);
-        MixedLpBound.Result lp = m > LP_MAX_EDGES ? null : MixedLpBound.solve(problem, LP_SECONDS, LP_ROUNDS);
+        MixedLpBound.Result lp = m > LP_MAX_EDGES ? null : MixedLpBound.solve(problem, LP_LIMITS);
         // service directions now fixed: the connecting passes and the flow are re-solved together, for
         // MIXED2's orientation and for the LP's where it leans one way by more than each of LEANS (MIXED2's
         // elsewhere), keeping the shortest
