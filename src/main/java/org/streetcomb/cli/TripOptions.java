@@ -63,11 +63,11 @@ public final class TripOptions {
                     + "as longitude,latitude; repeat for several. Each trip ends where the way on is shortest.")
     List<LonLat> reloadAt = new ArrayList<>();
 
-    @Option(names = "--service-speed", paramLabel = "KMH", defaultValue = "10",
+    @Option(names = "--service-speed", paramLabel = "KMH", defaultValue = "" + FleetRequest.DEFAULT_SERVICE_KMH,
             description = "Average speed while servicing, for trip durations (default: ${DEFAULT-VALUE} km/h).")
     double serviceSpeed;
 
-    @Option(names = "--travel-speed", paramLabel = "KMH", defaultValue = "30",
+    @Option(names = "--travel-speed", paramLabel = "KMH", defaultValue = "" + FleetRequest.DEFAULT_TRAVEL_KMH,
             description = "Average speed on deadhead, for trip durations (default: ${DEFAULT-VALUE} km/h).")
     double travelSpeed;
 

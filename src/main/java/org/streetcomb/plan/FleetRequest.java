@@ -25,6 +25,10 @@ public record FleetRequest(Double maxKm, Double maxHours, Integer vehicles, Doub
                            String demandField, Double demandPerKm, String lanesField, List<LonLat> reloadAt,
                            double serviceKmh, double travelKmh, Integer restarts) {
 
+    /** Average speeds, km/h, when none are given: a slow servicing pass and town traffic (common practice, from memory). */
+    public static final int DEFAULT_SERVICE_KMH = 10;
+    public static final int DEFAULT_TRAVEL_KMH = 30;
+
     /** How far a reload point may lie from the nearest street node (as the depot's default reach). */
     public static final double RELOAD_REACH_METRES = 500;
 

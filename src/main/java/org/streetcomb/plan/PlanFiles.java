@@ -13,6 +13,7 @@ import org.streetcomb.tour.TrafficSide;
 import org.streetcomb.write.DirectionSheetWriter;
 import org.streetcomb.write.GpxTourWriter;
 import org.streetcomb.write.KmlTourWriter;
+import org.streetcomb.write.SheetHeading;
 import org.streetcomb.write.TourGeoJsonWriter;
 
 /**
@@ -75,11 +76,20 @@ public final class PlanFiles {
                 Path file = fileOf(files.directions(), range);
                 List<List<Direction>> mine = sheets.subList(range[0], range[1]);
                 // the streets left out go on every sheet: each crew should know they are not forgotten
-                clock.run("directions", () -> DirectionSheetWriter.write(file, mine, label, leftOut(plan)));
+                SheetHeading heading = heading(plan, files, range[2], label);
+                clock.run("directions", () -> DirectionSheetWriter.write(file, mine, heading, leftOut(plan)));
                 written.add(new SheetFile(file, mine.stream().mapToInt(List::size).sum()));
             }
         }
         return new Written(List.copyOf(gpx), files.kml(), List.copyOf(written));
+    }
+
+    private static SheetHeading heading(Plan plan, FieldFiles files, int vehicle, String label) {
+        FleetRequest fleet = plan.request().arrangement().fleet();
+        return new SheetHeading(plan.request().input().getFileName().toString(), plan.network().lat(plan.depot()),
+                plan.network().lon(plan.depot()), files.planned(), vehicle, label,
+                fleet == null ? FleetRequest.DEFAULT_SERVICE_KMH : fleet.serviceKmh(),
+                fleet == null ? FleetRequest.DEFAULT_TRAVEL_KMH : fleet.travelKmh());
     }
 
     private static TrafficSide side(Plan plan) {

@@ -105,7 +105,10 @@ final class OsmRoadRules {
                 || "motorway".equals(highway) || "motorway_link".equals(highway) ? Travel.FORWARD : Travel.BOTH;
     }
 
-    /** The street name: name, else ref, else the road class ("unnamed residential"). */
+    /**
+     * The street name: name, else ref, else empty (the direction sheet then describes the way by its
+     * {@code highway} class and the named street it leads to, and never merges it with another unnamed way).
+     */
     static String name(Map<String, String> tags) {
         String name = tags.get("name");
         if (name != null && !name.isBlank()) {
@@ -115,7 +118,7 @@ final class OsmRoadRules {
         if (ref != null && !ref.isBlank()) {
             return ref;
         }
-        return "unnamed " + tags.get("highway").replace('_', ' ');
+        return "";
     }
 
     private static String first(Map<String, String> tags, List<String> keys) {

@@ -1,7 +1,6 @@
 package org.streetcomb.write;
 
 import java.io.IOException;
-import java.io.OutputStream;
 import java.io.OutputStreamWriter;
 import java.io.Writer;
 import java.nio.charset.StandardCharsets;
@@ -12,15 +11,17 @@ import org.streetcomb.SafeText;
 import org.streetcomb.tour.Direction;
 
 /**
- * Writes direction sheets, one section per tour: as CSV (RFC 4180: comma separated, CRLF line ends,
- * fields quoted when they hold a comma, quote or line break; a first line carries the caution, then
- * the column names)
- * or as a printable HTML page (one table per tour, the caution at the top, print-friendly styling and
- * no scripts). The format follows the file name's extension: .csv, or .html/.htm.
+ * Writes direction sheets, one section per tour or trip: as CSV (RFC 4180: comma separated, CRLF line ends,
+ * fields quoted when they hold a comma, quote or line break; first lines carry the caution and the heading,
+ * then the column names) or as a printable HTML page (A4, a heading with layer, depot, date and vehicle, each
+ * trip on a page of its own with its distance and duration, the column names repeated on every printed page,
+ * the caution at top and bottom, no scripts). The format follows the file name's extension: .csv, or
+ * .html/.htm.
  */
 public final class DirectionSheetWriter {
 
-    private static final String[] COLUMNS = {"tour", "step", "instruction", "street", "distance_m", "cumulative_m", "pass"};
+    private static final String[] COLUMNS = {"tour", "step", "instruction", "street", "distance_m", "cumulative_m", "pass",
+        "elapsed_min", "feature_id"};
 
     private DirectionSheetWriter() {
     }
@@ -41,86 +42,177 @@ public final class DirectionSheetWriter {
     public record LeftOut(String street, String feature, double metres, String why) {
     }
 
-    /** @param sheets each tour's directions, in tour order */
-    public static void write(Path target, List<List<Direction>> sheets, String label) {
-        write(target, sheets, label, List.of());
-    }
-
-    /** As {@link #write(Path, List, String)}, listing the streets left out after the tours. */
-    public static void write(Path target, List<List<Direction>> sheets, String label, List<LeftOut> leftOut) {
+    /**
+     * @param sheets  each section's directions, in order
+     * @param heading what the plan is: layer, depot, date, vehicle, speeds
+     * @param leftOut the streets asked for but left out, listed after the sections
+     */
+    public static void write(Path target, List<List<Direction>> sheets, SheetHeading heading, List<LeftOut> leftOut) {
         boolean html = Boolean.TRUE.equals(isHtml(target));
         AtomicFile.write(target, out -> {
+            Writer writer = new OutputStreamWriter(out, StandardCharsets.UTF_8);
             if (html) {
-                html(out, sheets, label, target.getFileName().toString(), leftOut);
+                html(writer, sheets, heading, leftOut);
             } else {
-                csv(out, sheets, leftOut);
+                csv(writer, sheets, heading, leftOut);
             }
+            writer.flush();
         });
     }
 
-    private static void csv(OutputStream stream, List<List<Direction>> sheets, List<LeftOut> leftOut)
+    /** One section's totals: metres serviced and driven without servicing, and hours at the heading's speeds. */
+    private record Totals(double service, double deadhead, double hours) {
+        static Totals of(List<Direction> sheet, SheetHeading heading) {
+            double service = 0;
+            double deadhead = 0;
+            for (Direction d : sheet) {
+                if (d.service()) {
+                    service += d.metres();
+                } else {
+                    deadhead += d.metres();
+                }
+            }
+            return new Totals(service, deadhead, heading.hours(service, deadhead));
+        }
+
+        double metres() {
+            return service + deadhead;
+        }
+    }
+
+    private static void csv(Writer out, List<List<Direction>> sheets, SheetHeading heading, List<LeftOut> leftOut)
             throws IOException {
-        Writer out = new OutputStreamWriter(stream, StandardCharsets.UTF_8);
         out.write(csvField("Caution: " + FieldCaution.TEXT) + "\r\n");
+        out.write(csvField(headingLine(heading)) + "\r\n");
+        StringBuilder sections = new StringBuilder();
+        for (int t = 0; t < sheets.size(); t++) {
+            Totals totals = Totals.of(sheets.get(t), heading);
+            sections.append(t == 0 ? "" : "; ").append(String.format(Locale.ROOT, "%s %d: %.2f km, about %s",
+                    heading.label().toLowerCase(Locale.ROOT), t + 1, totals.metres() / 1000,
+                    SheetHeading.duration(totals.hours())));
+        }
+        out.write(csvField(sections + speeds(heading)) + "\r\n");
         out.write(String.join(",", COLUMNS) + "\r\n");
         for (int t = 0; t < sheets.size(); t++) {
+            double hours = 0;
             for (Direction d : sheets.get(t)) {
+                hours += elapsed(d, heading);
                 out.write((t + 1) + "," + d.number() + "," + csvField(d.instruction()) + "," + csvField(d.street()) + ","
-                        + metres(d.metres()) + "," + metres(d.cumulative()) + "," + pass(d) + "\r\n");
+                        + metres(d.metres()) + "," + metres(d.cumulative()) + "," + pass(d) + ","
+                        + String.format(Locale.ROOT, "%.0f", hours * 60) + "," + csvField(d.feature()) + "\r\n");
             }
         }
         for (LeftOut street : leftOut) {
-            out.write("left out,," + csvField("Not planned: " + street.why() + " (feature " + street.feature() + ")")
-                    + "," + csvField(street.street()) + "," + metres(street.metres()) + ",,left out\r\n");
+            out.write("left out,," + csvField("Not planned: " + street.why()) + "," + csvField(street.street()) + ","
+                    + metres(street.metres()) + ",,left out,," + csvField(street.feature()) + "\r\n");
         }
-        out.flush();
     }
 
-    private static void html(OutputStream stream, List<List<Direction>> sheets, String label, String title,
-                             List<LeftOut> leftOut) throws IOException {
-        Writer out = new OutputStreamWriter(stream, StandardCharsets.UTF_8);
+    private static double elapsed(Direction d, SheetHeading heading) {
+        return d.service() ? heading.hours(d.metres(), 0) : heading.hours(0, d.metres());
+    }
+
+    private static String headingLine(SheetHeading heading) {
+        return "Layer: " + heading.layer() + "; depot (latitude, longitude): " + heading.depot()
+                + (heading.planned() == null ? "" : "; planned on " + heading.planned())
+                + (heading.vehicle() == 0 ? "" : "; vehicle " + heading.vehicle());
+    }
+
+    private static String speeds(SheetHeading heading) {
+        return String.format(Locale.ROOT, " (durations at %s km/h servicing, %s km/h otherwise)",
+                number(heading.serviceKmh()), number(heading.travelKmh()));
+    }
+
+    private static void html(Writer out, List<List<Direction>> sheets, SheetHeading heading, List<LeftOut> leftOut)
+            throws IOException {
+        String title = "Directions: " + heading.layer() + (heading.vehicle() == 0 ? "" : ", vehicle " + heading.vehicle());
         out.write("<!DOCTYPE html>\n<html lang=\"en\">\n<head>\n<meta charset=\"utf-8\">\n<title>"
-                + escape("Directions: " + title) + "</title>\n<style>\n"
-                + "body{font-family:sans-serif;margin:1.5em;color:#000}\n"
+                + escape(title) + "</title>\n<style>\n"
+                + "@page{size:A4;margin:12mm}\n"
+                + "body{font-family:sans-serif;margin:1.5em;color:#000;max-width:60em}\n"
                 + ".caution{border:2px solid #000;padding:.6em;font-weight:bold}\n"
                 + "table{border-collapse:collapse;width:100%;margin-bottom:1.5em}\n"
-                + "th,td{border:1px solid #666;padding:.25em .4em;text-align:left}\n"
-                + "td.n{text-align:right;font-variant-numeric:tabular-nums}\n"
-                + "tr.deadhead td{color:#555;font-style:italic}\n"
-                + "@media print{h2{break-before:page}h2:first-of-type{break-before:auto}tr{break-inside:avoid}}\n"
-                + "</style>\n</head>\n<body>\n<h1>" + escape("Directions: " + title) + "</h1>\n<p class=\"caution\">"
-                + escape(FieldCaution.TEXT) + "</p>\n");
+                + "th,td{border:1px solid #666;padding:.25em .4em;text-align:left;vertical-align:top}\n"
+                + "thead{display:table-header-group}\n"
+                + "td.n,th.n{text-align:right;font-variant-numeric:tabular-nums;white-space:nowrap}\n"
+                + "table.facts{width:auto}table.facts th{font-weight:normal;color:#333}table.facts td{font-weight:bold}\n"
+                + "tr.deadhead td{color:#444;font-style:italic}\n"
+                + ".fill{margin:1em 0}.fill span{display:inline-block;min-width:14em;border-bottom:1px solid #000}\n"
+                + "@media print{body{margin:0;font-size:10pt;max-width:none}"
+                + "section+section{break-before:page}tr{break-inside:avoid}h2{break-after:avoid}.s{display:none}}\n"
+                + "</style>\n</head>\n<body>\n<h1>" + escape(title) + "</h1>\n<p class=\"caution\">"
+                + escape(FieldCaution.TEXT) + "</p>\n<table class=\"facts\">\n");
+        fact(out, "Road layer", heading.layer());
+        fact(out, "Depot (latitude, longitude)", heading.depot());
+        if (heading.planned() != null) {
+            fact(out, "Planned on", heading.planned().toString());
+        }
+        if (heading.vehicle() != 0) {
+            fact(out, "Vehicle", String.valueOf(heading.vehicle()));
+        }
+        double metres = 0;
+        double hours = 0;
+        for (List<Direction> sheet : sheets) {
+            Totals totals = Totals.of(sheet, heading);
+            metres += totals.metres();
+            hours += totals.hours();
+        }
+        String plural = heading.label().toLowerCase(Locale.ROOT) + (sheets.size() == 1 ? "" : "s");
+        fact(out, "In all", String.format(Locale.ROOT, "%d %s, %.2f km, about %s", sheets.size(), plural, metres / 1000,
+                SheetHeading.duration(hours)) + speeds(heading));
+        out.write("</table>\n<p class=\"fill\">Crew: <span></span> Date driven: <span></span></p>\n");
         for (int t = 0; t < sheets.size(); t++) {
             List<Direction> sheet = sheets.get(t);
-            double total = sheet.isEmpty() ? 0 : sheet.get(sheet.size() - 1).cumulative();
-            out.write(String.format(Locale.ROOT, "<h2>%s %d: %.2f km</h2>%n", escape(label), t + 1, total / 1000));
-            out.write("<table>\n<thead><tr><th>Step</th><th>Instruction</th><th>Street</th><th>Distance (m)</th>"
-                    + "<th>Cumulative (km)</th><th>Pass</th></tr></thead>\n<tbody>\n");
+            Totals totals = Totals.of(sheet, heading);
+            out.write("<section>\n");
+            out.write(String.format(Locale.ROOT, "<h2>%s %d of %d%s</h2>%n", escape(heading.label()), t + 1,
+                    sheets.size(), heading.vehicle() == 0 ? "" : ", vehicle " + heading.vehicle()));
+            out.write(String.format(Locale.ROOT, "<p>%.2f km: service %.2f km, deadhead %.2f km; about %s.</p>%n",
+                    totals.metres() / 1000, totals.service() / 1000, totals.deadhead() / 1000,
+                    SheetHeading.duration(totals.hours())));
+            out.write("<table>\n<thead><tr><th class=\"n\">Step</th><th>Instruction</th><th class=\"s\">Street</th>"
+                    + "<th class=\"n\">Distance (m)</th><th class=\"n\">Cumulative (km)</th><th class=\"n\">Elapsed</th>"
+                    + "<th>Pass</th></tr></thead>\n<tbody>\n");
+            double elapsed = 0;
             for (Direction d : sheet) {
+                elapsed += elapsed(d, heading);
                 out.write("<tr class=\"" + pass(d) + "\"><td class=\"n\">" + d.number() + "</td><td>"
-                        + escape(d.instruction()) + "</td><td>" + escape(d.street()) + "</td><td class=\"n\">"
+                        + escape(d.instruction()) + "</td><td class=\"s\">" + escape(d.street()) + "</td><td class=\"n\">"
                         + String.format(Locale.ROOT, "%.0f", d.metres()) + "</td><td class=\"n\">"
-                        + String.format(Locale.ROOT, "%.2f", d.cumulative() / 1000) + "</td><td>"
-                        + (d.steps() == 0 ? "" : pass(d)) + "</td></tr>\n");
+                        + String.format(Locale.ROOT, "%.2f", d.cumulative() / 1000) + "</td><td class=\"n\">"
+                        + clock(elapsed) + "</td><td>" + (d.steps() == 0 ? "" : pass(d)) + "</td></tr>\n");
             }
-            out.write("</tbody>\n</table>\n");
+            out.write("</tbody>\n</table>\n</section>\n");
         }
         if (!leftOut.isEmpty()) {
             double total = leftOut.stream().mapToDouble(LeftOut::metres).sum();
-            out.write(String.format(Locale.ROOT, "<h2>Left out: %d street%s, %.2f km</h2>%n", leftOut.size(),
+            out.write(String.format(Locale.ROOT, "<section>\n<h2>Left out: %d street%s, %.2f km</h2>%n", leftOut.size(),
                     leftOut.size() == 1 ? "" : "s", total / 1000));
             out.write("<p>Asked for but not in this plan; service them another way or report them.</p>\n"
-                    + "<table>\n<thead><tr><th>Street</th><th>Feature</th><th>Length (m)</th><th>Why</th></tr></thead>\n"
-                    + "<tbody>\n");
+                    + "<table>\n<thead><tr><th>Street</th><th>Feature</th><th class=\"n\">Length (m)</th><th>Why</th>"
+                    + "</tr></thead>\n<tbody>\n");
             for (LeftOut street : leftOut) {
                 out.write("<tr><td>" + escape(street.street()) + "</td><td>" + escape(street.feature())
                         + "</td><td class=\"n\">" + String.format(Locale.ROOT, "%.0f", street.metres()) + "</td><td>"
                         + escape(street.why()) + "</td></tr>\n");
             }
-            out.write("</tbody>\n</table>\n");
+            out.write("</tbody>\n</table>\n</section>\n");
         }
         out.write("<p class=\"caution\">" + escape(FieldCaution.TEXT) + "</p>\n</body>\n</html>\n");
-        out.flush();
+    }
+
+    private static void fact(Writer out, String name, String value) throws IOException {
+        out.write("<tr><th>" + escape(name) + "</th><td>" + escape(value) + "</td></tr>\n");
+    }
+
+    /** Hours as h:mm, rounded to the minute. */
+    private static String clock(double hours) {
+        long minutes = Math.round(hours * 60);
+        return String.format(Locale.ROOT, "%d:%02d", minutes / 60, minutes % 60);
+    }
+
+    private static String number(double value) {
+        return value == Math.rint(value) ? String.valueOf((long) value) : String.valueOf(value);
     }
 
     private static String pass(Direction d) {

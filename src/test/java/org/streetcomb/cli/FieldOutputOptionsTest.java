@@ -34,7 +34,7 @@ class FieldOutputOptionsTest {
         assertTrue(Files.size(gpx) > 0 && Files.size(kml) > 0);
         String sheet = Files.readString(csv);
         assertTrue(sheet.startsWith("\"Caution: Plans are advice"), "the caution heads the sheet");
-        assertTrue(sheet.contains("\r\ntour,step,instruction,street,distance_m,cumulative_m,pass\r\n"));
+        assertTrue(sheet.contains("\r\ntour,step,instruction,street,distance_m,cumulative_m,pass,elapsed_min,feature_id\r\n"));
     }
 
     @Test

@@ -113,10 +113,10 @@ class OsmRoadRulesTest {
 
     @ParameterizedTest(name = "{0} -> {1}")
     @CsvSource(delimiter = '|', value = {
-        // the name is name, else ref, else the road class (https://wiki.openstreetmap.org/wiki/Key:name, Key:ref)
+        // the name is name, else ref, else none (https://wiki.openstreetmap.org/wiki/Key:name, Key:ref)
         "highway=primary name=Avenida_Madero ref=MEX_45 | Avenida_Madero",
         "highway=primary ref=MEX_45 | MEX_45",
-        "highway=living_street | unnamed living street",
+        "highway=living_street | ''",
     })
     void names(String spec, String expected) {
         assertEquals(expected, OsmRoadRules.name(tags(spec)));

@@ -35,7 +35,7 @@ import org.junit.jupiter.api.Assumptions;
  * console error, uncaught exception, error log entry and network request that is not a file or data URL.
  * Skips the calling test when Chromium is absent, unless STREETCOMB_CI is set (then it fails).
  */
-final class HeadlessChromium implements AutoCloseable {
+public final class HeadlessChromium implements AutoCloseable {
 
     private static final ObjectMapper MAPPER = new ObjectMapper();
     private static final Pattern LISTENING = Pattern.compile("DevTools listening on (ws://\\S+)");
@@ -53,7 +53,7 @@ final class HeadlessChromium implements AutoCloseable {
     }
 
     /** The chromium executable on the PATH; absent skips the test, or fails it in CI. */
-    static Path executable() {
+    public static Path executable() {
         for (String dir : System.getenv().getOrDefault("PATH", "").split(File.pathSeparator)) {
             for (String name : new String[] {"chromium", "chromium-browser"}) {
                 Path candidate = Path.of(dir, name);
