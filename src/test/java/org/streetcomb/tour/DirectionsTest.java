@@ -72,6 +72,48 @@ class DirectionsTest {
         assertEquals(0, straight.angle(), 0.5);
     }
 
+    /**
+     * Monaco (OpenStreetMap, fixtures/benchmarks/mixed-osm, NOTICE) has many unnamed ways: slip roads, pieces of
+     * dual carriageways, roundabouts. Each is told by its OSM class (https://wiki.openstreetmap.org/wiki/Key:highway,
+     * Tag:junction=roundabout) and a named street nearby, and a line never spans two unnamed ways, except the
+     * pieces of one roundabout.
+     */
+    @Test
+    void unnamedWaysAreToldByClassAndNeverMerged() throws Exception {
+        Plan plan = org.streetcomb.plan.Planner.plan(new org.streetcomb.plan.PlanRequest(
+                java.nio.file.Path.of("fixtures/benchmarks/mixed-osm/monaco.osm.pbf"), null, 0.5, 500, true,
+                org.streetcomb.read.ReadOptions.DEFAULTS, new org.streetcomb.plan.ServiceOptions(
+                        org.streetcomb.solve.KerbMode.ONE_PASS, null, null, true)),
+                org.streetcomb.check.RepairOptions.NONE, new org.streetcomb.timing.StageClock(
+                        org.streetcomb.timing.StageClock.SILENT));
+        StreetNetwork network = plan.network();
+        Tour tour = plan.tours().get(0);
+        List<Direction> sheet = Directions.of(network, EdgeBearings.of(network), TrafficSide.RIGHT, tour);
+        int unnamed = 0;
+        int tied = 0;
+        for (Direction line : sheet.subList(0, sheet.size() - 1)) {
+            RoadFeature first = network.feature(tour.edges()[line.firstStep()]);
+            assertEquals(first.id(), line.feature());
+            if (!first.name().isEmpty()) {
+                assertEquals(first.name(), line.street());
+                continue;
+            }
+            unnamed++;
+            boolean roundabout = "roundabout".equals(first.properties().get("junction"));
+            String kind = roundabout ? "unnamed roundabout" : "unnamed " + first.properties().get("highway").replace('_', ' ');
+            assertTrue(line.street().startsWith(kind), line.street() + " for " + first.properties());
+            assertTrue(line.instruction().contains("the " + line.street()), line.instruction());
+            tied += line.street().contains(" towards ") || line.street().contains(" from ") ? 1 : 0;
+            for (int k = line.firstStep(); k < line.firstStep() + line.steps(); k++) {
+                RoadFeature step = network.feature(tour.edges()[k]);
+                assertTrue(step.id().equals(first.id()) || roundabout && "roundabout".equals(step.properties().get("junction")),
+                        "line " + line.number() + " spans " + first.id() + " and " + step.id());
+            }
+        }
+        assertTrue(unnamed > 50, "Monaco has unnamed ways on the tour: " + unnamed);
+        assertTrue(tied > unnamed / 2, "most are tied to a named street nearby: " + tied + " of " + unnamed);
+    }
+
     private static RoadFeature road(String id, String name, double lon1, double lat1, double lon2, double lat2) {
         return new RoadFeature(id, name, GEOMETRY.createLineString(new Coordinate[] {
             new Coordinate(lon1, lat1), new Coordinate(lon2, lat2)}), Travel.BOTH, true, Map.of());
