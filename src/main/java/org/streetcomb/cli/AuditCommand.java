@@ -44,6 +44,8 @@ import picocli.CommandLine.Parameters;
             "GPS tracks wander and maps age: check doubtful streets on the ground before reporting them."})
 public final class AuditCommand implements Callable<Integer> {
 
+
+
     static final String TRACK_CAUTION = "Coverage is inferred from GPS tracks, which wander and drop out: check "
             + "doubtful streets on the ground before reporting them covered or missed.";
     /** The report's cautions when no tour is planned: checking streets on the ground is driving too. */
@@ -238,8 +240,8 @@ public final class AuditCommand implements Callable<Integer> {
             cautions.addAll(CHECK_CAUTIONS);
         }
         String drive = tracks.size() == 1 ? tracks.get(0).getFileName().toString() : tracks.size() + " GPX files";
-        report.write("Coverage: " + drive + " on " + layerFile.getFileName(), layers, groups, summary.json(), cautions,
-                clock);
+        report.write("Coverage: " + drive + " on " + layerFile.getFileName(), layers, groups, summary.json(),
+                summary.glance(), cautions, clock);
     }
 
     /** What the plan asked for, when any of the plan's scope options is given; null audits every required street. */

@@ -8,6 +8,7 @@ import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.math.BigDecimal;
 import java.math.RoundingMode;
 import java.nio.file.Path;
+import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 import org.streetcomb.plan.Audit;
@@ -17,6 +18,7 @@ import org.streetcomb.match.MatchSettings;
 import org.streetcomb.match.MatchTally;
 import org.streetcomb.coverage.StreetCoverage;
 import org.streetcomb.plan.TrackFileResult;
+import org.streetcomb.report.MapReport;
 import org.streetcomb.timing.StageClock;
 
 /**
@@ -33,6 +35,7 @@ final class AuditSummary {
 
     private final ObjectNode json = SummaryFormat.newObject();
     private final StringBuilder text = new StringBuilder();
+    private final List<MapReport.Entry> glance = new ArrayList<>();
 
     private AuditSummary() {
     }
@@ -157,6 +160,18 @@ final class AuditSummary {
             s.line("Wrong way", "%.3f km of one-way streets driven against their direction (not counted)",
                     coverage.wrongWay() / 1000);
         }
+        s.glance.add(new MapReport.Entry("Covered", String.format(Locale.ROOT, "%.1f %% of %.1f km asked for",
+                100 * share(coverage.driven(), coverage.needed()).doubleValue(), coverage.needed() / 1000)));
+        s.glance.add(new MapReport.Entry("Missed", String.format(Locale.ROOT, "%.1f km: %d streets missed, %d partly",
+                coverage.missedLength() / 1000, coverage.count(CoverageStatus.MISSED), coverage.count(CoverageStatus.PARTLY))));
+        if (coverage.wrongWay() > 0) {
+            s.glance.add(new MapReport.Entry("Wrong way", String.format(Locale.ROOT,
+                    "%.1f km of one-way streets against their direction", coverage.wrongWay() / 1000)));
+        }
+        if (coverage.count(CoverageStatus.LEFT_OUT) > 0) {
+            s.glance.add(new MapReport.Entry("Left out", coverage.count(CoverageStatus.LEFT_OUT)
+                    + " streets the plan did not ask for (not counted)"));
+        }
         List<StreetCoverage> listed = notCovered(coverage);
         for (StreetCoverage street : listed.subList(0, Math.min(STREETS_LISTED, listed.size()))) {
             s.line("", "%-7s %5.1f %%  %s %s", street.status().label(), 100 * street.fraction(), street.feature().id(),
@@ -185,6 +200,12 @@ final class AuditSummary {
     /** Adds a part to the summary (the mop-up tour), after what is there. */
     void add(PlanSummary.Section section) {
         json.set(section.key(), section.json());
+        if (section.key().equals("mop_up")) {
+            glance.add(new MapReport.Entry("Mop-up", section.json().has("length_m")
+                    ? String.format(Locale.ROOT, "%.1f km, %.1f km of it service", section.json().get("length_m").asDouble() / 1000,
+                            section.json().get("service_m").asDouble() / 1000)
+                    : "none needed"));
+        }
         for (String[] labelled : section.lines()) {
             line(labelled[0], "%s", labelled[1]);
         }
@@ -204,6 +225,11 @@ final class AuditSummary {
 
     private void line(String label, String format, Object... args) {
         SummaryFormat.line(text, label, format, args);
+    }
+
+    /** The few figures a report shows first: coverage, what was missed, the mop-up. */
+    List<MapReport.Entry> glance() {
+        return glance;
     }
 
     /** The summary as a JSON tree, the one {@link #toJson} prints. */

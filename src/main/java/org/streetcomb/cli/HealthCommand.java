@@ -92,7 +92,8 @@ public final class HealthCommand implements Callable<Integer> {
         HealthSummary summary = HealthSummary.of(report, clock.stages(), out);
         List<MapLayer> layers = new ArrayList<>(List.of(NetworkLayer.of(network)));
         layers.addAll(FindingLayers.of(findings));
-        map.write("Health check: " + input.getFileName(), layers, FindingLayers.groups(findings), summary.json(), clock);
+        map.write("Health check: " + input.getFileName(), layers, FindingLayers.groups(findings), summary.json(),
+                summary.glance(), clock);
         PrintWriter stdout = spec.commandLine().getOut();
         stdout.print(json ? summary.toJson() : summary.toText());
         stdout.flush();

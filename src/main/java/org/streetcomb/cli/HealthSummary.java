@@ -5,6 +5,7 @@ import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.math.BigDecimal;
 import java.math.RoundingMode;
 import java.nio.file.Path;
+import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 import org.locationtech.jts.geom.Coordinate;
@@ -13,6 +14,7 @@ import org.streetcomb.check.FindingKind;
 import org.streetcomb.check.HealthReport;
 import org.streetcomb.check.Severity;
 import org.streetcomb.network.StreetNetwork;
+import org.streetcomb.report.MapReport;
 import org.streetcomb.timing.StageClock;
 
 /**
@@ -28,6 +30,7 @@ final class HealthSummary {
 
     private final ObjectNode json = SummaryFormat.newObject();
     private final StringBuilder text = new StringBuilder();
+    private final List<MapReport.Entry> glance = new ArrayList<>();
 
     private HealthSummary() {
     }
@@ -90,6 +93,17 @@ final class HealthSummary {
         line("Findings", "%d: %d blocking, %d warning%s, %d note%s", report.findings().size(), report.count(Severity.BLOCKING),
                 report.count(Severity.WARNING), report.count(Severity.WARNING) == 1 ? "" : "s",
                 report.count(Severity.NOTE), report.count(Severity.NOTE) == 1 ? "" : "s");
+        glance.add(new MapReport.Entry("Findings", String.format(Locale.ROOT, "%d: %d blocking, %d warnings, %d notes",
+                report.findings().size(), report.count(Severity.BLOCKING), report.count(Severity.WARNING),
+                report.count(Severity.NOTE))));
+        StringBuilder kinds = new StringBuilder();
+        report.counts().forEach((kind, n) -> kinds.append(kinds.length() == 0 ? "" : ", ")
+                .append(kind.code().replace('_', ' ')).append(' ').append(n));
+        if (kinds.length() > 0) {
+            glance.add(new MapReport.Entry("Kinds", kinds.toString()));
+        }
+        glance.add(new MapReport.Entry("Verdict", report.blocking()
+                ? "fix the blocking findings before planning" : "ready to plan; warnings and notes are worth a look"));
         for (var entry : report.counts().entrySet()) {
             FindingKind kind = entry.getKey();
             List<Finding> ofKind = report.findings().stream().filter(f -> f.kind() == kind).toList();
@@ -146,5 +160,10 @@ final class HealthSummary {
 
     String toJson() {
         return SummaryFormat.json(json);
+    }
+
+    /** The few figures a report shows first. */
+    List<MapReport.Entry> glance() {
+        return glance;
     }
 }

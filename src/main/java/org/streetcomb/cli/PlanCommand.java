@@ -1,5 +1,6 @@
 package org.streetcomb.cli;
 
+import java.util.List;
 import java.io.PrintWriter;
 import java.nio.file.Path;
 import java.util.concurrent.Callable;
@@ -27,6 +28,8 @@ import picocli.CommandLine.Parameters;
             "Plans are advice: obey traffic law and signs, never handle a device while driving, and check the "
                 + "route against local rules and your own risk assessment; map data may be out of date."})
 public final class PlanCommand implements Callable<Integer> {
+
+
 
     @Parameters(index = "0", paramLabel = "LAYER", description = "Road centrelines: GeoJSON (.geojson, .json), a shapefile (.shp, or a .zip holding one), a GeoPackage (.gpkg) or OpenStreetMap (.osm, .osm.gz, .osm.bz2, .osm.pbf).")
     Path input;
@@ -86,7 +89,8 @@ public final class PlanCommand implements Callable<Integer> {
         if (report.requested()) {
             summary.add(report.section());
         }
-        report.write("Plan: " + input.getFileName(), PlanLayers.of(plan), PlanLayers.groups(plan), summary.json(), clock);
+        report.write("Plan: " + input.getFileName(), PlanLayers.of(plan), PlanLayers.groups(plan), summary.json(),
+                summary.glance(), clock);
         stdout.print(json ? summary.toJson() : summary.toText());
         stdout.flush();
         return ExitCode.OK;

@@ -8,14 +8,18 @@ import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.math.BigDecimal;
 import java.math.RoundingMode;
 import java.nio.file.Path;
+import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
+import org.streetcomb.fleet.Fleet;
 import org.streetcomb.network.StreetNetwork;
 import org.streetcomb.plan.Plan;
+import org.streetcomb.report.MapReport;
 import org.streetcomb.timing.StageClock;
 import org.streetcomb.tour.Tour;
 import org.streetcomb.write.FieldCaution;
+import org.streetcomb.write.SheetHeading;
 
 /**
  * The summary of a plan, built once and printed as text or as JSON, so both carry the same numbers.
@@ -38,6 +42,7 @@ final class PlanSummary {
 
     private final ObjectNode json = SummaryFormat.newObject();
     private final StringBuilder text = new StringBuilder();
+    private final List<MapReport.Entry> glance = new ArrayList<>();
 
     private PlanSummary() {
     }
@@ -79,6 +84,7 @@ final class PlanSummary {
         totals.put("service_m", metres(plan.serviceLength()));
         totals.put("deadhead_m", metres(deadhead));
         totals.put("deadhead_share", share(deadhead, tour));
+        totals.put("hours", BigDecimal.valueOf(plan.hours()).setScale(3, RoundingMode.HALF_EVEN));
         double objective = network.hasCosts() ? cost(plan, network) : tour;
         if (network.hasCosts()) {
             totals.put("network_cost", metres(network.weightedByCost().totalLength()));
@@ -131,6 +137,20 @@ final class PlanSummary {
         double deadhead = plan.deadheadLength();
         line("Tour", "%.3f km: service %.3f km, deadhead %.3f km (%.1f %%)", tour / 1000, plan.serviceLength() / 1000,
                 deadhead / 1000, tour == 0 ? 0 : 100 * deadhead / tour);
+        String speeds = String.format(Locale.ROOT, "service at %s km/h, deadhead at %s km/h",
+                speed(plan.request().arrangement().serviceKmh()), speed(plan.request().arrangement().travelKmh()));
+        line("Duration", "about %s driving (%s)", SheetHeading.duration(plan.hours()), speeds);
+        glance("Distance", "%.1f km: %.1f km service, %.1f km deadhead (%.0f %%)", tour / 1000, plan.serviceLength() / 1000,
+                deadhead / 1000, tour == 0 ? 0 : 100 * deadhead / tour);
+        if (plan.hasTrips()) {
+            Fleet fleet = plan.arranged().fleet();
+            int vehicles = fleet.vehicles().size();
+            glance("Time", "%d vehicle%s, %d trip%s; the longest day about %s (%s)", vehicles, vehicles == 1 ? "" : "s",
+                    fleet.trips().size(), fleet.trips().size() == 1 ? "" : "s",
+                    SheetHeading.duration(fleet.longestHours()), speeds);
+        } else {
+            glance("Time", "about %s (%s)", SheetHeading.duration(plan.hours()), speeds);
+        }
         double bound = plan.augmentation().lowerBound();
         String source = plan.augmentation().boundSource().isEmpty() ? "" : " (" + plan.augmentation().boundSource() + ")";
         double objective = tour;
@@ -145,9 +165,19 @@ final class PlanSummary {
         } else {
             line("Bound", "%.3f km%s: no tour can be shorter%s", bound / 1000, source, reachesBound(plan, objective)
                     ? "; this one is optimal"
+                    : plan.hasTrips()
+                    ? String.format(Locale.ROOT, "; the trips together are at most %.2f %% longer than the shortest single"
+                            + " tour (cutting into trips adds the drives back to the depot)", bound == 0 ? 0
+                            : 100 * (objective - bound) / bound)
                     : String.format(Locale.ROOT, "; this one is at most %.2f %% longer than the optimum%s",
                             bound == 0 ? 0 : 100 * (objective - bound) / bound, LOOSE));
         }
+        String unit = network.hasCosts() ? "cheaper" : "shorter";
+        glance("Quality", "%s", reachesBound(plan, objective) ? "optimal: no tour can be " + unit
+                : plan.hasTrips() ? String.format(Locale.ROOT, "the trips together are %.1f %% above the best single tour's"
+                        + " bound", bound == 0 ? 0 : 100 * (objective - bound) / bound)
+                : String.format(Locale.ROOT, "at most %.1f %% above the best possible", bound == 0 ? 0
+                        : 100 * (objective - bound) / bound));
         Tour first = plan.tours().get(0);
         if (first.end(network) != first.start()) {
             int end = first.end(network);
@@ -189,6 +219,8 @@ final class PlanSummary {
             }
             line("Left out", "%.3f km (%.1f %% of the streets asked for) in %d edges: one-way streets cut them off",
                     left / 1000, 100 * left / (left + servedLength), plan.leftOut().length);
+            glance("Left out", "%.1f km (%.1f %% of the streets asked for): one-way streets cut them off", left / 1000,
+                    100 * left / (left + servedLength));
         }
         StringBuilder times = new StringBuilder();
         for (StageClock.Stage stage : stages) {
@@ -197,6 +229,9 @@ final class PlanSummary {
         line("Time", "%s", times);
         for (String warning : plan.warnings()) {
             line("Warning", "%s", warning);
+        }
+        if (!plan.warnings().isEmpty()) {
+            glance("Warnings", "%d, listed under All figures", plan.warnings().size());
         }
         if (out != null) {
             line("Written", "%s", out);
@@ -223,6 +258,19 @@ final class PlanSummary {
         StringBuilder b = new StringBuilder(", skipped ");
         skipped.forEach((type, n) -> b.append(b.length() > 10 ? ", " : "").append(n).append(' ').append(type));
         return b.toString();
+    }
+
+    private static String speed(double kmh) {
+        return kmh == Math.rint(kmh) ? String.valueOf((long) kmh) : String.valueOf(kmh);
+    }
+
+    private void glance(String label, String format, Object... args) {
+        glance.add(new MapReport.Entry(label, String.format(Locale.ROOT, format, args)));
+    }
+
+    /** The few figures a report shows first: distance, time, quality, what was left out. */
+    List<MapReport.Entry> glance() {
+        return glance;
     }
 
     private void line(String label, String format, Object... args) {

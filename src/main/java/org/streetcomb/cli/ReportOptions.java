@@ -122,18 +122,19 @@ final class ReportOptions {
     }
 
     /** Writes the report files asked for, with the planning cautions; does nothing when none is. */
-    void write(String title, List<MapLayer> layers, List<MapGroup> groups, JsonNode summary, StageClock clock) {
-        write(title, layers, groups, summary, CAUTIONS, clock);
+    void write(String title, List<MapLayer> layers, List<MapGroup> groups, JsonNode summary,
+               List<MapReport.Entry> glance, StageClock clock) {
+        write(title, layers, groups, summary, glance, CAUTIONS, clock);
     }
 
     /** Writes the report files asked for, with the given cautions; does nothing when none is. */
-    void write(String title, List<MapLayer> layers, List<MapGroup> groups, JsonNode summary, List<String> cautions,
-               StageClock clock) {
+    void write(String title, List<MapLayer> layers, List<MapGroup> groups, JsonNode summary,
+               List<MapReport.Entry> glance, List<String> cautions, StageClock clock) {
         if (!requested()) {
             return;
         }
         MapReport report = new MapReport(title, layers, groups, summary, run(), cautions,
-                basemap == null ? null : new MapReport.Basemap(basemap, basemapCredit), displayTolerance);
+                basemap == null ? null : new MapReport.Basemap(basemap, basemapCredit), displayTolerance, glance);
         clock.run("report", () -> {
             if (html != null) {
                 new HtmlReportWriter().write(html, report);

@@ -15,6 +15,16 @@ public record Arrangement(TrafficSide side, boolean turnAware, FleetRequest flee
     /** What the command line does without options: right-hand traffic, turn-aware order, no trips. */
     public static final Arrangement DEFAULT = new Arrangement(TrafficSide.RIGHT, true, null);
 
+    /** Average speed while servicing, km/h: the fleet's, else the default. */
+    public double serviceKmh() {
+        return fleet == null ? FleetRequest.DEFAULT_SERVICE_KMH : fleet.serviceKmh();
+    }
+
+    /** Average speed on deadhead, km/h: the fleet's, else the default. */
+    public double travelKmh() {
+        return fleet == null ? FleetRequest.DEFAULT_TRAVEL_KMH : fleet.travelKmh();
+    }
+
     public boolean trips() {
         return fleet != null && fleet.requested();
     }

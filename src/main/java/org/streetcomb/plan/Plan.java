@@ -86,6 +86,12 @@ public record Plan(PlanRequest request, ReadReport read, StreetNetwork network, 
         return tours.stream().mapToDouble(t -> t.length(network)).sum();
     }
 
+    /** Hours to drive the tours at the arrangement's service and travel speeds. */
+    public double hours() {
+        Arrangement arrangement = request.arrangement();
+        return serviceLength() / (1000 * arrangement.serviceKmh()) + deadheadLength() / (1000 * arrangement.travelKmh());
+    }
+
     public double deadheadLength() {
         return tours.stream().mapToDouble(t -> t.deadhead(network)).sum();
     }

@@ -85,11 +85,10 @@ public final class PlanFiles {
     }
 
     private static SheetHeading heading(Plan plan, FieldFiles files, int vehicle, String label) {
-        FleetRequest fleet = plan.request().arrangement().fleet();
+        Arrangement arrangement = plan.request().arrangement();
         return new SheetHeading(plan.request().input().getFileName().toString(), plan.network().lat(plan.depot()),
-                plan.network().lon(plan.depot()), files.planned(), vehicle, label,
-                fleet == null ? FleetRequest.DEFAULT_SERVICE_KMH : fleet.serviceKmh(),
-                fleet == null ? FleetRequest.DEFAULT_TRAVEL_KMH : fleet.travelKmh());
+                plan.network().lon(plan.depot()), files.planned(), vehicle, label, arrangement.serviceKmh(),
+                arrangement.travelKmh());
     }
 
     private static TrafficSide side(Plan plan) {

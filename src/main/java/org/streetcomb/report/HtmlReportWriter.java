@@ -69,6 +69,14 @@ public final class HtmlReportWriter {
 
     private static void panel(Writer w, MapReport report, LeafletAssets leaflet) throws IOException {
         w.write("<aside id=\"panel\">\n<h1>" + HtmlText.escape(report.title()) + "</h1>\n");
+        if (!report.glance().isEmpty()) {
+            w.write("<section id=\"glance\"><table class=\"glance\">\n");
+            for (MapReport.Entry entry : report.glance()) {
+                w.write("<tr><th>" + HtmlText.escape(entry.label()) + "</th><td>" + HtmlText.escape(entry.value())
+                        + "</td></tr>\n");
+            }
+            w.write("</table></section>\n");
+        }
         w.write("<p class=\"caution\"><strong>Caution.</strong> " + HtmlText.escape(String.join(" ", report.cautions()))
                 + "</p>\n");
         w.write("<section id=\"layers\"><h2>Layers</h2>\n<ul class=\"switches\">\n");
@@ -93,13 +101,15 @@ public final class HtmlReportWriter {
             w.write("</ul>\n</details>\n");
         }
         w.write("<p class=\"hint\">Point at a line or a dot to see what it is; click it for details.</p></section>\n");
-        w.write("<section id=\"summary\"><h2>Summary</h2>\n" + SummaryTables.html(report.summary()) + "\n</section>\n");
-        w.write("<section id=\"run\"><h2>How it was made</h2>\n<table class=\"facts\">\n");
+        w.write("<details class=\"fold\"><summary>All figures, as <code>--json</code> prints them</summary>\n"
+                + "<section id=\"summary\">" + SummaryTables.html(report.summary()) + "\n</section>\n</details>\n");
+        w.write("<details class=\"fold\"><summary>How it was made</summary>\n<section id=\"run\">"
+                + "<table class=\"facts\">\n");
         for (MapReport.Entry entry : report.run()) {
             w.write("<tr><th>" + HtmlText.escape(entry.label()) + "</th><td>" + HtmlText.escape(entry.value()) + "</td></tr>\n");
         }
         w.write("<tr><th>Map display</th><td>" + HtmlText.escape(displayNote(report, leaflet)) + "</td></tr>\n");
-        w.write("</table>\n</section>\n");
+        w.write("</table>\n</section>\n</details>\n");
         w.write("<section id=\"cautions\"><h2>Before you drive</h2>\n<ul>\n");
         for (String caution : report.cautions()) {
             w.write("<li>" + HtmlText.escape(caution) + "</li>\n");

@@ -16,9 +16,12 @@ import java.util.List;
  * @param cautions         safety cautions, one sentence each
  * @param basemap          tiles to draw under the layers, or null for none (the report then needs no network)
  * @param displayTolerance lines are simplified for display to within this many metres (0: not simplified)
+ * @param glance           the few figures a reader needs first (the lines of the command's text summary that
+ *                         matter most), shown above everything else
  */
 public record MapReport(String title, List<MapLayer> layers, List<MapGroup> groups, JsonNode summary,
-                        List<Entry> run, List<String> cautions, Basemap basemap, double displayTolerance) {
+                        List<Entry> run, List<String> cautions, Basemap basemap, double displayTolerance,
+                        List<Entry> glance) {
 
     /** A labelled line of text. */
     public record Entry(String label, String value) {
@@ -33,7 +36,14 @@ public record MapReport(String title, List<MapLayer> layers, List<MapGroup> grou
     public record Basemap(String urlTemplate, String credit) {
     }
 
+    /** A report without figures at a glance. */
+    public MapReport(String title, List<MapLayer> layers, List<MapGroup> groups, JsonNode summary, List<Entry> run,
+                     List<String> cautions, Basemap basemap, double displayTolerance) {
+        this(title, layers, groups, summary, run, cautions, basemap, displayTolerance, List.of());
+    }
+
     public MapReport {
+        glance = List.copyOf(glance);
         layers = List.copyOf(layers);
         groups = List.copyOf(groups);
         run = List.copyOf(run);

@@ -31,7 +31,7 @@ public record SheetHeading(String layer, double depotLat, double depotLon, Local
     }
 
     /** "1 h 05 min", "40 min": rounded to the minute. */
-    static String duration(double hours) {
+    public static String duration(double hours) {
         long minutes = Math.round(hours * 60);
         return minutes < 60 ? minutes + " min" : String.format(Locale.ROOT, "%d h %02d min", minutes / 60, minutes % 60);
     }
