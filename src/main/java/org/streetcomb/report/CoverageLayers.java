@@ -36,18 +36,17 @@ import org.streetcomb.read.Travel;
  */
 public final class CoverageLayers {
 
-    static final String COVERED = "#67a9cf";
-    static final String PARTLY = "#ef8a62";
-    static final String MISSED = "#b2182b";
+    static final String COVERED = MapPalette.COVERED;
+    static final String PARTLY = MapPalette.PARTLY;
+    static final String MISSED = MapPalette.MISSED;
     static final String NOT_REQUIRED = NetworkLayer.COLOUR;
-    /** Purple: apart from the red-blue scale, from the tracks' near-black and from the tour colours' blue. */
-    static final String WRONG_WAY = "#762a83";
+    static final String WRONG_WAY = MapPalette.WRONG_WAY;
     private static final Map<CoverageStatus, MapStyle> STYLES = new EnumMap<>(Map.of(
             CoverageStatus.COVERED, MapStyle.solid(COVERED, 3, 0.9),
             CoverageStatus.PARTLY, MapStyle.solid(PARTLY, 4, 0.95),
             CoverageStatus.MISSED, MapStyle.solid(MISSED, 5, 0.95),
             CoverageStatus.NOT_REQUIRED, new MapStyle(NOT_REQUIRED, 2, 1, "4 4"),
-            CoverageStatus.LEFT_OUT, new MapStyle(NOT_REQUIRED, 3, 1, "1 5")));
+            CoverageStatus.LEFT_OUT, MapStyle.solid(MapPalette.LEFT_OUT, 4, 0.9)));
     /** Statuses drawn one feature per street name. */
     private static final Set<CoverageStatus> MERGED = EnumSet.of(CoverageStatus.COVERED, CoverageStatus.NOT_REQUIRED,
             CoverageStatus.LEFT_OUT);
@@ -117,7 +116,7 @@ public final class CoverageLayers {
         }
         layers.add(new MapLayer("not-driven", "Still to drive (" + parts.size() + ")",
                 "the stretches of required streets not driven; arrows where only one direction is still needed",
-                MapLayer.Kind.LINES, MapStyle.solid(MISSED, 3, 1), true, parts));
+                MapLayer.Kind.LINES, MapStyle.solid(MapPalette.STILL_TO_DRIVE, 2, 1), true, parts));
         if (!coverage.wrongWayParts().isEmpty()) {
             List<MapFeature> wrong = new ArrayList<>();
             for (WrongWayPart part : coverage.wrongWayParts()) {
@@ -226,12 +225,12 @@ public final class CoverageLayers {
         return new MapFeature(arrowed(line, part.length(), true), null, null, label, details);
     }
 
-    /** The line, with a chevron at its middle pointing along it when asked and long enough to read. */
+    /** The line, with an arrowhead beside its middle pointing along it when asked and long enough to read. */
     private static double[][] arrowed(double[] line, double length, boolean arrow) {
         if (!arrow || length < MIN_ARROW_PART) {
             return new double[][] {line};
         }
-        return new double[][] {line, PlanLayers.chevron(line, Math.min(12, Math.max(3, length * 0.12)))};
+        return new double[][] {line, PlanLayers.arrowhead(line, Math.min(12, Math.max(3, length * 0.12)))};
     }
 
     private static String travel(Travel travel) {

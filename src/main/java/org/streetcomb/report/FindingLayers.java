@@ -16,13 +16,12 @@ import org.streetcomb.check.Severity;
 
 /**
  * The health check's findings as map layers: lines (streets cut off, duplicates) and points (near misses,
- * crossings), coloured by severity, grouped by kind so each kind can be shown alone. Findings with no
- * place (features the reader dropped) are in the summary only.
+ * crossings), coloured by kind ({@link MapPalette#FINDING_KINDS}) and grouped by kind so each kind can be shown
+ * alone; the severity is in each finding's details and in the group's title. Findings with no place (features
+ * the reader dropped) are in the summary only.
  */
 public final class FindingLayers {
 
-    private static final Map<Severity, String> COLOURS = new EnumMap<>(Map.of(
-            Severity.BLOCKING, "#b3261e", Severity.WARNING, "#e8590c", Severity.NOTE, "#5f3dc4"));
 
     private FindingLayers() {
     }
@@ -50,13 +49,13 @@ public final class FindingLayers {
             }
         }
         return List.of(
-                new MapLayer("finding-lines", "Findings on streets", "streets a finding is about, coloured by severity",
-                        MapLayer.Kind.LINES, MapStyle.solid(COLOURS.get(Severity.WARNING), 6, 0.8), true, lines),
-                new MapLayer("finding-points", "Findings at places", "places a finding is about, coloured by severity",
-                        MapLayer.Kind.POINTS, MapStyle.solid(COLOURS.get(Severity.WARNING), 12, 1), true, points));
+                new MapLayer("finding-lines", "Findings on streets", "streets a finding is about, in the colour of its kind",
+                        MapLayer.Kind.LINES, MapStyle.solid(MapPalette.ARROWS, 6, 0.85), true, lines),
+                new MapLayer("finding-points", "Findings at places", "places a finding is about, in the colour of its kind",
+                        MapLayer.Kind.POINTS, MapStyle.solid(MapPalette.ARROWS, 12, 1), true, points));
     }
 
-    /** One group per kind found, in the order reports list kinds, coloured by the kind's worst severity. */
+    /** One group per kind found, in the order reports list kinds, in the kind's colour, titled with its worst severity. */
     public static List<MapGroup> groups(List<Finding> findings) {
         Map<FindingKind, int[]> counts = new EnumMap<>(FindingKind.class);
         Map<FindingKind, Severity> worst = new EnumMap<>(FindingKind.class);
@@ -66,7 +65,8 @@ public final class FindingLayers {
         }
         List<MapGroup> groups = new ArrayList<>();
         counts.forEach((kind, n) -> groups.add(new MapGroup(kind.code().replace('_', '-'),
-                String.format(Locale.ROOT, "%s (%d)", kind.code().replace('_', ' '), n[0]), COLOURS.get(worst.get(kind)))));
+                String.format(Locale.ROOT, "%s (%d, %s)", kind.code().replace('_', ' '), n[0], worst.get(kind).code()),
+                colour(kind))));
         return groups;
     }
 
@@ -77,8 +77,12 @@ public final class FindingLayers {
         details.put("Features", String.join(", ", finding.featureIds()));
         details.put("Measured", String.format(Locale.ROOT, "%.2f %s", finding.value(), finding.unit()));
         details.put("What to do", finding.fix());
-        return new MapFeature(parts, finding.kind().code().replace('_', '-'), COLOURS.get(finding.severity()),
+        return new MapFeature(parts, finding.kind().code().replace('_', '-'), colour(finding.kind()),
                 finding.problem(), details);
+    }
+
+    static String colour(FindingKind kind) {
+        return MapPalette.FINDING_KINDS.get(kind.ordinal());
     }
 
     private static double[] flat(Coordinate[] coordinates) {

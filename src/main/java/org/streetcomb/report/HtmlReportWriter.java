@@ -12,9 +12,13 @@ import java.nio.charset.StandardCharsets;
 import java.nio.file.Path;
 import java.security.MessageDigest;
 import java.security.NoSuchAlgorithmException;
+import java.util.ArrayList;
 import java.util.Base64;
+import java.util.LinkedHashSet;
+import java.util.List;
 import java.util.Locale;
 import java.util.Map;
+import java.util.Set;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
 import org.streetcomb.write.AtomicFile;
@@ -82,14 +86,15 @@ public final class HtmlReportWriter {
         w.write("<section id=\"layers\"><h2>Layers</h2>\n<ul class=\"switches\">\n");
         for (MapLayer layer : report.layers()) {
             w.write("<li><label><input type=\"checkbox\" data-layer=\"" + layer.id() + "\"" + (layer.shown() ? " checked" : "")
-                    + "> " + swatch(layer.kind(), layer.style()) + HtmlText.escape(layer.title()) + "</label>");
+                    + "> " + swatch(layer) + HtmlText.escape(layer.title()) + "</label>");
             if (!layer.note().isEmpty()) {
                 w.write("<div class=\"note\">" + HtmlText.escape(layer.note()) + "</div>");
             }
             w.write("</li>\n");
         }
         w.write("</ul>\n");
-        if (!report.groups().isEmpty()) {
+        // a single group would only repeat the layers above it
+        if (report.groups().size() > 1) {
             w.write("<details class=\"groups\"" + (report.groups().size() <= OPEN_GROUPS ? " open" : "") + "><summary>Show "
                     + report.groups().size() + (report.groups().size() == 1 ? " group" : " groups") + "</summary>\n"
                     + "<ul class=\"switches\">\n");
@@ -130,9 +135,44 @@ public final class HtmlReportWriter {
         return java.math.BigDecimal.valueOf(value).stripTrailingZeros().toPlainString();
     }
 
+    /**
+     * A layer's legend swatch: in the one colour its features are drawn in, or, when they are drawn in several
+     * (tours by vehicle, findings by kind), in stripes of up to five of them, marked {@code data-multi} since the
+     * groups below then name the colours.
+     */
+    private static String swatch(MapLayer layer) {
+        Set<String> colours = new LinkedHashSet<>();
+        for (MapFeature feature : layer.features()) {
+            String colour = feature.colour() != null ? feature.colour() : layer.style().colour();
+            if (colour.matches("#[0-9A-Fa-f]{6}")) {
+                colours.add(colour);
+            }
+        }
+        if (colours.size() <= 1) {
+            String colour = colours.isEmpty() ? layer.style().colour() : colours.iterator().next();
+            return swatch(layer.kind(), new MapStyle(colour, layer.style().width(), layer.style().opacity(),
+                    layer.style().dash()));
+        }
+        List<String> shown = new ArrayList<>(colours).subList(0, Math.min(5, colours.size()));
+        StringBuilder stripes = new StringBuilder("linear-gradient(90deg");
+        for (int i = 0; i < shown.size(); i++) {
+            stripes.append(String.format(Locale.ROOT, ", %s %.0f%% %.0f%%", shown.get(i), 100.0 * i / shown.size(),
+                    100.0 * (i + 1) / shown.size()));
+        }
+        stripes.append(')');
+        String shape = layer.kind() == MapLayer.Kind.POINTS ? "dot" : "line";
+        return "<span class=\"swatch " + shape + " multi\" data-multi=\"" + shown.size() + "\" style=\"--g:" + stripes
+                + "\"></span>";
+    }
+
     private static String swatch(MapLayer.Kind kind, MapStyle style) {
         // colours and dashes are validated by MapStyle, so they are safe inside the attribute
-        String shape = kind == MapLayer.Kind.LINES ? "line" : kind == MapLayer.Kind.POINTS ? "dot" : "text";
+        String shape = switch (kind) {
+            case LINES -> "line";
+            case POINTS -> "dot";
+            case ARROWS -> "arrow";
+            case LABELS -> "text";
+        };
         String border = style.dash().isEmpty() ? "solid" : "dotted";
         return "<span class=\"swatch " + shape + "\" style=\"--c:" + style.colour() + ";--b:" + border + "\"></span>";
     }

@@ -25,8 +25,16 @@ public record MapLayer(String id, String title, String note, Kind kind, MapStyle
         /** filled circles of the style's width */
         POINTS,
         /** the feature's label as text at its point */
-        LABELS
+        LABELS,
+        /**
+         * filled arrowheads, each part a closed triangle in map units; drawn only where the map shows them at a
+         * readable size ({@link #ARROW_METRES_PER_PIXEL})
+         */
+        ARROWS
     }
+
+    /** Arrowheads are drawn while a pixel covers at most this many metres: a 12 m head is then 6 pixels or more. */
+    public static final double ARROW_METRES_PER_PIXEL = 2;
 
     public MapLayer {
         if (!id.matches("[a-z0-9-]+")) {

@@ -19,7 +19,7 @@ import org.streetcomb.read.RoadFeature;
  */
 public final class NetworkLayer {
 
-    static final String COLOUR = "#9aa39c";
+    static final String COLOUR = MapPalette.STREETS;
     /** Feature ids listed in a street's details; the rest are counted. */
     private static final int IDS_LISTED = 8;
     private static final GeometryFactory FACTORY = new GeometryFactory();

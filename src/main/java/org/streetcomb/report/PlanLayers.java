@@ -19,20 +19,13 @@ import org.streetcomb.tour.Tour;
  */
 public final class PlanLayers {
 
-    /** Tour colours, chosen to stay apart from each other, from the deadhead amber and the depot red. */
-    static final String[] TOUR_COLOURS = {"#2b59c3", "#2a9d8f", "#8f3fb5", "#1d7a3a", "#c2185b",
-        "#0b6e8a", "#5c6f1d", "#3d3b8e", "#6b4e16", "#a23b72"};
-    static final String DEADHEAD_COLOUR = "#f0a202";
-    static final String ARROW_COLOUR = "#263238";
-    static final String DEPOT_COLOUR = "#d7263d";
-    static final String START_COLOUR = "#36454f";
-    static final String LEFT_OUT_COLOUR = "#e8590c";
     /** Above this many runs, step labels would hide the map and slow it: the step-number layer is left out. */
     static final int MAX_STEP_LABELS = 2000;
     /** Above this many arrows the layer starts switched off, so a large plan opens quickly. */
     static final int MAX_ARROWS_SHOWN = 20_000;
-    /** Steps shorter than this get no arrow: it would not be readable. */
-    private static final double MIN_ARROW_STEP = 6;
+    /** Length of an arrowhead, metres, and the shortest step that carries one. */
+    private static final double ARROW_METRES = 12;
+    private static final double MIN_ARROW_STEP = 2 * ARROW_METRES;
     private static final double METRES_PER_DEGREE = Math.PI / 180 * 6_371_008.8;
 
     private final MappedTours plan;
@@ -69,7 +62,7 @@ public final class PlanLayers {
                 outline.add(new MapFeature(new double[][] {flat}, null, null, plan.area().label(), Map.of()));
             }
             layers.add(new MapLayer("area", "Service area", "streets inside are serviced, roads around it only travelled",
-                    MapLayer.Kind.LINES, new MapStyle(ARROW_COLOUR, 2, 0.8, "8 4"), true, outline));
+                    MapLayer.Kind.LINES, new MapStyle(MapPalette.AREA, 2, 0.8, "8 4"), true, outline));
         }
         if (plan.leftOut().length > 0) {
             List<MapFeature> left = new ArrayList<>();
@@ -82,7 +75,7 @@ public final class PlanLayers {
             }
             layers.add(new MapLayer("left-out", String.format(Locale.ROOT, "Left out (%.2f km)", metres / 1000),
                     "streets asked for that one-way streets cut off: not planned", MapLayer.Kind.LINES,
-                    MapStyle.solid(LEFT_OUT_COLOUR, 5, 0.9), true, left));
+                    MapStyle.solid(MapPalette.LEFT_OUT, 5, 0.9), true, left));
         }
         return layers;
     }
@@ -127,7 +120,7 @@ public final class PlanLayers {
     }
 
     static String tourColour(int tour) {
-        return TOUR_COLOURS[tour % TOUR_COLOURS.length];
+        return MapPalette.tour(tour);
     }
 
     private static String groupId(int tour) {
@@ -146,32 +139,32 @@ public final class PlanLayers {
                 MapFeature feature = run.feature(t);
                 (run.service ? service : deadhead).add(feature);
                 labels.add(run.label(t));
-                double[][] chevrons = arrows(tour, run);
-                arrowCount += chevrons.length;
-                if (chevrons.length > 0) {
-                    arrows.add(new MapFeature(chevrons, groupId(t), null, "", Map.of()));
+                double[][] heads = arrows(tour, run);
+                arrowCount += heads.length;
+                if (heads.length > 0) {
+                    arrows.add(new MapFeature(heads, groupId(t), null, "", Map.of()));
                 }
             }
         }
         List<MapLayer> layers = new ArrayList<>();
         layers.add(new MapLayer("service", "Service passes", "streets driven to service them, in the colour of their " + (plan.vehicleOf(0) > 0 ? "vehicle" : noun.toLowerCase(Locale.ROOT)),
-                MapLayer.Kind.LINES, MapStyle.solid(TOUR_COLOURS[0], 4, 0.85), true, service));
+                MapLayer.Kind.LINES, MapStyle.solid(MapPalette.tour(0), 4, 0.85), true, service));
         layers.add(new MapLayer("deadhead", "Deadhead passes", "streets driven again without servicing",
-                MapLayer.Kind.LINES, new MapStyle(DEADHEAD_COLOUR, 6, 1, "3 6"), true, deadhead));
+                MapLayer.Kind.LINES, new MapStyle(MapPalette.DEADHEAD, 4, 1, "2 6"), true, deadhead));
         boolean arrowsShown = arrowCount <= MAX_ARROWS_SHOWN;
         layers.add(new MapLayer("arrows", "Direction of travel", arrowsShown ? "one arrow per step, visible when zoomed in"
                 : "one arrow per step, visible when zoomed in; off at start on a plan this large",
-                MapLayer.Kind.LINES, MapStyle.solid(ARROW_COLOUR, 1.5, 0.9), arrowsShown, arrows));
+                MapLayer.Kind.ARROWS, MapStyle.solid(MapPalette.ARROWS, 1, 0.9), arrowsShown, arrows));
         if (labels.size() <= MAX_STEP_LABELS) {
             layers.add(new MapLayer("steps", "Step numbers", "the first step of each run on one street",
-                    MapLayer.Kind.LABELS, MapStyle.solid(ARROW_COLOUR, 1, 1), false, labels));
+                    MapLayer.Kind.LABELS, MapStyle.solid(MapPalette.ARROWS, 1, 1), false, labels));
         }
         List<MapFeature> otherStarts = starts(false);
         if (!otherStarts.isEmpty()) {
             layers.add(new MapLayer("starts", "Tour starts", "where each separate part's tour starts and ends",
-                    MapLayer.Kind.POINTS, MapStyle.solid(START_COLOUR, 10, 1), true, otherStarts));
+                    MapLayer.Kind.POINTS, MapStyle.solid(MapPalette.STARTS, 10, 1), true, otherStarts));
         }
-        layers.add(new MapLayer("depot", "Depot", "", MapLayer.Kind.POINTS, MapStyle.solid(DEPOT_COLOUR, 16, 1), true,
+        layers.add(new MapLayer("depot", "Depot", "", MapLayer.Kind.POINTS, MapStyle.solid(MapPalette.DEPOT, 16, 1), true,
                 starts(true)));
         return layers;
     }
@@ -222,28 +215,31 @@ public final class PlanLayers {
         return NetworkLayer.edgePoints(network, e, forward);
     }
 
-    /** A chevron at the middle of each step of the run long enough to carry one, pointing the way it is driven. */
+    /** An arrowhead at the middle of each step of the run long enough to carry one, pointing the way it is driven. */
     private double[][] arrows(Tour tour, Run run) {
-        List<double[]> chevrons = new ArrayList<>();
+        List<double[]> heads = new ArrayList<>();
         for (int i = run.first; i <= run.last; i++) {
             int e = tour.edges()[i];
-            double length = network.length(e);
-            if (length >= MIN_ARROW_STEP) {
-                chevrons.add(chevron(edgePoints(e, tour.forward()[i]), Math.min(20, Math.max(3, length * 0.12))));
+            if (network.length(e) >= MIN_ARROW_STEP) {
+                heads.add(arrowhead(edgePoints(e, tour.forward()[i]), ARROW_METRES));
             }
         }
-        return chevrons.toArray(new double[0][]);
+        return heads.toArray(new double[0][]);
     }
 
-    /** Two strokes meeting at the point halfway along the line, each {@code size} metres long. */
-    static double[] chevron(double[] line, double size) {
+    /**
+     * A closed triangle {@code size} metres long whose tip is halfway along the line, pointing along it, set
+     * beside the line on the right of the direction of travel: a street driven both ways then shows two heads
+     * side by side, one per direction, instead of two crossed ones.
+     */
+    static double[] arrowhead(double[] line, double size) {
         double xScale = METRES_PER_DEGREE * Math.cos(Math.toRadians(line[1]));
         int n = line.length / 2;
         double total = 0;
         for (int k = 1; k < n; k++) {
             total += Math.hypot((line[2 * k] - line[2 * k - 2]) * xScale, (line[2 * k + 1] - line[2 * k - 1]) * METRES_PER_DEGREE);
         }
-        double half = total / 2;
+        double half = total / 2 + size / 2;
         double walked = 0;
         for (int k = 1; k < n; k++) {
             double dx = (line[2 * k] - line[2 * k - 2]) * xScale;
@@ -251,19 +247,19 @@ public final class PlanLayers {
             double segment = Math.hypot(dx, dy);
             if (segment > 0 && (walked + segment >= half || k == n - 1)) {
                 double f = Math.min(1, (half - walked) / segment);
-                double tipX = line[2 * k - 2] * xScale + f * dx;
-                double tipY = line[2 * k - 1] * METRES_PER_DEGREE + f * dy;
                 double ux = dx / segment;
                 double uy = dy / segment;
-                // the strokes run back from the tip at 30 degrees either side of the direction of travel
-                double c = Math.cos(Math.toRadians(30));
-                double s = Math.sin(Math.toRadians(30));
-                double leftX = tipX - size * (ux * c - uy * s);
-                double leftY = tipY - size * (uy * c + ux * s);
-                double rightX = tipX - size * (ux * c + uy * s);
-                double rightY = tipY - size * (uy * c - ux * s);
-                return new double[] {leftX / xScale, leftY / METRES_PER_DEGREE, tipX / xScale, tipY / METRES_PER_DEGREE,
-                    rightX / xScale, rightY / METRES_PER_DEGREE};
+                // the right-hand normal of the direction of travel (x east, y north)
+                double side = 0.55 * size;
+                double tipX = line[2 * k - 2] * xScale + f * dx + side * uy;
+                double tipY = line[2 * k - 1] * METRES_PER_DEGREE + f * dy - side * ux;
+                double baseX = tipX - size * ux;
+                double baseY = tipY - size * uy;
+                double halfWidth = size * 0.4;
+                double[] m = {baseX + halfWidth * uy, baseY - halfWidth * ux, tipX, tipY, baseX - halfWidth * uy,
+                    baseY + halfWidth * ux};
+                return new double[] {m[0] / xScale, m[1] / METRES_PER_DEGREE, m[2] / xScale, m[3] / METRES_PER_DEGREE,
+                    m[4] / xScale, m[5] / METRES_PER_DEGREE, m[0] / xScale, m[1] / METRES_PER_DEGREE};
             }
             walked += segment;
         }
@@ -330,7 +326,7 @@ public final class PlanLayers {
         MapFeature label(int tour) {
             Map<String, String> details = new LinkedHashMap<>();
             details.put("Street", name);
-            double[] middle = chevron(line(), 0);
+            double[] middle = arrowhead(line(), 0);
             return MapFeature.point(middle[2], middle[3], groupId(tour), steps(), details);
         }
     }

@@ -64,10 +64,13 @@ public final class QuickLookPng {
             g.fillRect(0, 0, width, height);
             PixelFrame frame = frame(report);
             if (frame != null) {
-                double thinning = thinning(frame.metresPerPixel(centreLatitude(report)));
+                double metresPerPixel = frame.metresPerPixel(centreLatitude(report));
+                double thinning = thinning(metresPerPixel);
                 for (MapLayer layer : report.layers()) {
                     if (layer.shown()) {
-                        layer(g, frame, layer, thinning);
+                        if (layer.kind() != MapLayer.Kind.ARROWS || metresPerPixel <= MapLayer.ARROW_METRES_PER_PIXEL) {
+                            layer(g, frame, layer, thinning);
+                        }
                     }
                 }
                 scaleBar(g, frame, report);
@@ -167,6 +170,19 @@ public final class QuickLookPng {
                 }
                 g.draw(path);
             }
+        } else if (layer.kind() == MapLayer.Kind.ARROWS) {
+            for (MapFeature feature : layer.features()) {
+                g.setColor(colour(feature.colour() != null ? feature.colour() : style.colour(), style.opacity()));
+                for (double[] part : feature.parts()) {
+                    Path2D.Double head = new Path2D.Double();
+                    head.moveTo(frame.px(part[0]), frame.py(part[1]));
+                    for (int i = 2; i < part.length; i += 2) {
+                        head.lineTo(frame.px(part[i]), frame.py(part[i + 1]));
+                    }
+                    head.closePath();
+                    g.fill(head);
+                }
+            }
         } else if (layer.kind() == MapLayer.Kind.POINTS) {
             double r = style.width() / 2;
             for (MapFeature feature : layer.features()) {
@@ -229,6 +245,13 @@ public final class QuickLookPng {
             g.setColor(colour(style.colour(), 1));
             if (layer.kind() == MapLayer.Kind.POINTS) {
                 g.fill(new Ellipse2D.Double(x + 14, cy - 5, 10, 10));
+            } else if (layer.kind() == MapLayer.Kind.ARROWS) {
+                Path2D.Double head = new Path2D.Double();
+                head.moveTo(x + 14, cy - 5);
+                head.lineTo(x + 26, cy);
+                head.lineTo(x + 14, cy + 5);
+                head.closePath();
+                g.fill(head);
             } else {
                 g.setStroke(stroke(new MapStyle(style.colour(), Math.min(style.width(), 5), 1, style.dash()), 1));
                 g.draw(new Line2D.Double(x + 8, cy, x + 32, cy));

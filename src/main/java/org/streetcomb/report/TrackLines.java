@@ -20,7 +20,7 @@ import org.streetcomb.read.TrackSegment;
  */
 public final class TrackLines implements Consumer<TrackSegment> {
 
-    static final String COLOUR = "#1f2a30";
+    static final String COLOUR = MapPalette.TRACKS;
     /** Fixes drawn at most, over all tracks; more are thinned by a whole-number stride. */
     static final int MOST_FIXES_DRAWN = 100_000;
 

@@ -74,7 +74,7 @@
       var group = byGroup[key];
       if (!group) {
         group = byGroup[key] = L.featureGroup();
-        buckets.push({ layer: layer.id, group: key, content: group });
+        buckets.push({ layer: layer.id, group: key, content: group, arrows: layer.kind === 'arrows' });
       }
       var colour = feature.c || style.colour;
       var interactive = Boolean(feature.t || feature.d);
@@ -83,6 +83,11 @@
         shape = L.polyline(decode(feature.p), {
           renderer: renderer, color: colour, weight: style.width, opacity: style.opacity,
           dashArray: style.dash || null, lineCap: style.dash ? 'butt' : 'round', interactive: interactive
+        });
+      } else if (layer.kind === 'arrows') {
+        shape = L.polygon(decode(feature.p), {
+          renderer: renderer, color: colour, weight: 1, opacity: style.opacity, fillColor: colour,
+          fillOpacity: style.opacity, interactive: false
         });
       } else if (layer.kind === 'points') {
         shape = L.circleMarker(decode(feature.p)[0][0], {
@@ -117,9 +122,19 @@
     });
   });
 
+  // Arrowheads are drawn only where they are big enough to read as arrows: a pixel covers at most
+  // ARROW_METRES_PER_PIXEL metres (Web Mercator ground resolution: 156543.03 m at zoom 0 on the equator,
+  // times the cosine of the latitude, halved at each zoom level).
+  var ARROW_METRES_PER_PIXEL = 2;
+  function arrowsReadable() {
+    var metresPerPixel = 156543.03392 * Math.cos(map.getCenter().lat * Math.PI / 180) / Math.pow(2, map.getZoom());
+    return metresPerPixel <= ARROW_METRES_PER_PIXEL;
+  }
+
   function refresh() {
+    var readable = arrowsReadable();
     buckets.forEach(function (b) {
-      var visible = shown[b.layer] && (b.group === '' || groupShown[b.group] !== false);
+      var visible = shown[b.layer] && (b.group === '' || groupShown[b.group] !== false) && (!b.arrows || readable);
       if (visible && !map.hasLayer(b.content)) {
         b.content.addTo(map);
       } else if (!visible && map.hasLayer(b.content)) {
@@ -141,6 +156,7 @@
     map.setView([0, 0], 2);
   }
   refresh();
+  map.on('zoomend', refresh);
   // For scripting and tests: the map, and how many features were drawn and how long it took.
   window.streetcombReport = { map: map, drawn: drawn, buckets: buckets };
   document.body.dataset.drawn = String(drawn);

@@ -110,14 +110,21 @@ class PlanLayersTest {
     }
 
     @Test
-    void chevronPointsTheWayTheLineRuns() {
-        // a line due east: the tip is at its middle and both strokes lie west of it, one north, one south
-        double[] chevron = PlanLayers.chevron(new double[] {0.0, 0.0, 0.001, 0.0}, 10);
-        assertEquals(0.0005, chevron[2], 1e-12);
-        assertTrue(chevron[0] < chevron[2] && chevron[4] < chevron[2]);
-        assertTrue(chevron[1] * chevron[5] < 0, "the strokes lie either side of the line");
-        double stroke = Geodesic.WGS84.Inverse(chevron[3], chevron[2], chevron[1], chevron[0]).s12;
-        assertEquals(10, stroke, 0.05, "stroke length in metres (spherical frame against the ellipsoid)");
+    void arrowheadPointsTheWayTheLineRunsOnTheRightOfTravel() {
+        // a line due east: the tip is east of the base, both lie south of the line (on the right of travel), and
+        // the base's corners lie either side of the tip's parallel
+        double[] head = PlanLayers.arrowhead(new double[] {0.0, 0.0, 0.001, 0.0}, 10);
+        assertEquals(8, head.length, "a closed triangle");
+        assertEquals(head[0], head[6]);
+        assertTrue(head[0] < head[2] && head[4] < head[2], "the tip points east");
+        assertTrue(head[3] < 0, "beside the line on the right of eastward travel");
+        assertTrue((head[1] - head[3]) * (head[5] - head[3]) < 0, "the base spans the tip's parallel");
+        double baseX = (head[0] + head[4]) / 2;
+        double baseY = (head[1] + head[5]) / 2;
+        double length = Geodesic.WGS84.Inverse(baseY, baseX, head[3], head[2]).s12;
+        assertEquals(10, length, 0.05, "length in metres (spherical frame against the ellipsoid)");
+        double[] back = PlanLayers.arrowhead(new double[] {0.001, 0.0, 0.0, 0.0}, 10);
+        assertTrue(back[3] > 0, "driven the other way, the head sits on the other side: the two never cross");
     }
 
     private static double geodesicLength(MapFeature feature) {
