@@ -48,11 +48,6 @@ public final class AuditCommand implements Callable<Integer> {
 
     static final String TRACK_CAUTION = "Coverage is inferred from GPS tracks, which wander and drop out: check "
             + "doubtful streets on the ground before reporting them covered or missed.";
-    /** The report's cautions when no tour is planned: checking streets on the ground is driving too. */
-    static final List<String> CHECK_CAUTIONS = List.of(
-            "Map data may be out of date: streets close, one-way rules change and new streets appear.",
-            "When you check streets on the ground, obey traffic law and road signs, and never handle a phone, "
-                    + "tablet or GPS unit while driving.");
 
     @Parameters(index = "0", paramLabel = "LAYER", description = "Road centrelines, the same layer the tour was planned on: GeoJSON, a shapefile (or a .zip holding one), a GeoPackage (.gpkg) or OpenStreetMap.")
     Path layerFile;
@@ -237,7 +232,7 @@ public final class AuditCommand implements Callable<Integer> {
             groups = PlanLayers.groups(mopUpPlan);
             cautions.addAll(ReportOptions.CAUTIONS);
         } else {
-            cautions.addAll(CHECK_CAUTIONS);
+            cautions.addAll(ReportOptions.CHECK_CAUTIONS);
         }
         String drive = tracks.size() == 1 ? tracks.get(0).getFileName().toString() : tracks.size() + " GPX files";
         report.write("Coverage: " + drive + " on " + layerFile.getFileName(), layers, groups, summary.json(),

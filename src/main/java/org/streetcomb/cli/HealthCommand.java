@@ -93,7 +93,7 @@ public final class HealthCommand implements Callable<Integer> {
         List<MapLayer> layers = new ArrayList<>(List.of(NetworkLayer.of(network)));
         layers.addAll(FindingLayers.of(findings));
         map.write("Health check: " + input.getFileName(), layers, FindingLayers.groups(findings), summary.json(),
-                summary.glance(), clock);
+                summary.glance(), ReportOptions.CHECK_CAUTIONS, clock);
         PrintWriter stdout = spec.commandLine().getOut();
         stdout.print(json ? summary.toJson() : summary.toText());
         stdout.flush();

@@ -34,6 +34,12 @@ final class ReportOptions {
             "Map data may be out of date: streets close, turn bans change and new streets appear.",
             "Local rules and the operator's own risk assessment come before this plan.");
 
+    /** The cautions of a report with no tour in it (a health check, an audit without mop-up): checking streets on the ground is driving too. */
+    static final List<String> CHECK_CAUTIONS = List.of(
+            "Map data may be out of date: streets close, one-way rules change and new streets appear.",
+            "When you check streets on the ground, obey traffic law and road signs, and never handle a phone, "
+                    + "tablet or GPS unit while driving.");
+
     @Option(names = "--report", paramLabel = "FILE.html",
             description = "Write one self-contained HTML page with a map of the result and its summary; it opens "
                     + "from disk with no network.")

@@ -86,7 +86,7 @@ public final class HtmlReportWriter {
         w.write("<section id=\"layers\"><h2>Layers</h2>\n<ul class=\"switches\">\n");
         for (MapLayer layer : report.layers()) {
             w.write("<li><label><input type=\"checkbox\" data-layer=\"" + layer.id() + "\"" + (layer.shown() ? " checked" : "")
-                    + "> " + swatch(layer) + HtmlText.escape(layer.title()) + "</label>");
+                    + "> " + swatch(layer, report.groups().size() > 1) + HtmlText.escape(layer.title()) + "</label>");
             if (!layer.note().isEmpty()) {
                 w.write("<div class=\"note\">" + HtmlText.escape(layer.note()) + "</div>");
             }
@@ -136,19 +136,21 @@ public final class HtmlReportWriter {
     }
 
     /**
-     * A layer's legend swatch: in the one colour its features are drawn in, or, when they are drawn in several
-     * (tours by vehicle, findings by kind), in stripes of up to five of them, marked {@code data-multi} since the
-     * groups below then name the colours.
+     * A layer's legend swatch: in the colour its features are drawn in; or, when they are drawn in the colours
+     * of the groups listed below it (tours by vehicle, findings by kind), in stripes of up to five of those,
+     * marked {@code data-multi}, since the groups name the colours.
      */
-    private static String swatch(MapLayer layer) {
+    private static String swatch(MapLayer layer, boolean grouped) {
         Set<String> colours = new LinkedHashSet<>();
+        boolean ownColours = false;
         for (MapFeature feature : layer.features()) {
+            ownColours |= feature.colour() != null;
             String colour = feature.colour() != null ? feature.colour() : layer.style().colour();
             if (colour.matches("#[0-9A-Fa-f]{6}")) {
                 colours.add(colour);
             }
         }
-        if (colours.size() <= 1) {
+        if (colours.size() <= 1 && !(grouped && ownColours)) {
             String colour = colours.isEmpty() ? layer.style().colour() : colours.iterator().next();
             return swatch(layer.kind(), new MapStyle(colour, layer.style().width(), layer.style().opacity(),
                     layer.style().dash()));

@@ -23,20 +23,20 @@ import java.util.List;
 public final class MapPalette {
 
     /** Okabe–Ito blue, orange, bluish green, sky blue, reddish purple. */
-    static final List<String> TOURS = List.of("#0072B2", "#E69F00", "#009E73", "#56B4E9", "#CC79A7");
+    static final List<String> TOURS = List.of("#0072b2", "#e69f00", "#009e73", "#56b4e9", "#cc79a7");
     /** The street network, drawn under everything else. */
-    static final String STREETS = "#CCCCCC";
+    static final String STREETS = "#cccccc";
     /** Deadhead passes, dotted over the service line. */
     static final String DEADHEAD = "#000000";
     static final String ARROWS = "#555555";
     /** Okabe–Ito vermillion. */
-    static final String DEPOT = "#D55E00";
+    static final String DEPOT = "#d55e00";
     /** Where each separate part's tour starts. */
-    static final String STARTS = "#7F7F7F";
+    static final String STARTS = "#333333";
     /** Tol's indigo: the outline of a service area. */
     static final String AREA = "#332288";
     /** Okabe–Ito yellow: streets asked for but left out of the plan, in the plan's and the audit's maps alike. */
-    static final String LEFT_OUT = "#F0E442";
+    static final String LEFT_OUT = "#f0e442";
 
     static final String COVERED = "#67a9cf";
     static final String PARTLY = "#ef8a62";
@@ -44,11 +44,11 @@ public final class MapPalette {
     /** The stretches still to drive, drawn over the streets' status colours. */
     static final String STILL_TO_DRIVE = "#762a83";
     static final String WRONG_WAY = "#332288";
-    static final String TRACKS = "#7F7F7F";
+    static final String TRACKS = "#7f7f7f";
 
     /** Tol's muted scheme, one colour per health-check kind in the order of {@code FindingKind}. */
-    static final List<String> FINDING_KINDS = List.of("#CC6677", "#882255", "#332288", "#999933", "#DDCC77", "#44AA99",
-            "#88CCEE", "#AA4499", "#117733");
+    static final List<String> FINDING_KINDS = List.of("#cc6677", "#882255", "#332288", "#999933", "#ddcc77", "#44aa99",
+            "#88ccee", "#aa4499", "#117733");
 
     private MapPalette() {
     }

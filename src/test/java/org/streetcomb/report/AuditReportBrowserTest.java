@@ -14,10 +14,7 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Set;
-import org.junit.jupiter.api.AfterAll;
-import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
-import org.junit.jupiter.api.io.TempDir;
 import org.streetcomb.cli.Main;
 
 /**
@@ -26,28 +23,13 @@ import org.streetcomb.cli.Main;
  * out; see AuditCommandTest), so the streets the map must show as missed are known from how the drive was
  * made, not from the program.
  */
-class AuditReportBrowserTest {
+class AuditReportBrowserTest extends BrowserTestBase {
 
     private static final ObjectMapper MAPPER = new ObjectMapper();
     private static final String DEMO = "fixtures/demo/brackenford.geojson";
     private static final Path DRIVE = Path.of("fixtures/demo/brackenford-drive.gpx");
     private static final Set<String> SKIPPED = Set.of("bf-044", "bf-005");
 
-    @TempDir
-    static Path folder;
-    private static HeadlessChromium chromium;
-
-    @BeforeAll
-    static void startBrowser() throws Exception {
-        chromium = HeadlessChromium.start(Files.createDirectory(folder.resolve("profile")));
-    }
-
-    @AfterAll
-    static void stopBrowser() throws Exception {
-        if (chromium != null) {
-            chromium.close();
-        }
-    }
 
     @Test
     void auditReportShowsTheSkippedStreetsAsMissedTheMopUpTourAndTheJsonNumbers() throws Exception {

@@ -158,6 +158,12 @@ public final class HeadlessChromium implements AutoCloseable {
         return result.path("result").path("value");
     }
 
+    /** Sets the page's viewport in CSS pixels, as a browser window of that size would have. */
+    void viewport(int width, int height) throws Exception {
+        call("Emulation.setDeviceMetricsOverride", MAPPER.createObjectNode().put("width", width).put("height", height)
+                .put("deviceScaleFactor", 1).put("mobile", false));
+    }
+
     byte[] screenshot() throws Exception {
         JsonNode shot = call("Page.captureScreenshot", MAPPER.createObjectNode().put("format", "png"));
         return java.util.Base64.getDecoder().decode(shot.path("data").asText());
