@@ -137,7 +137,9 @@ public final class FieldOutputOptions {
                 side.name().toLowerCase(Locale.ROOT), counts.straightOns(), counts.per100Km(counts.uTurns()),
                 counts.per100Km(counts.uTurnsOutsideDeadEnds()), counts.per100Km(counts.crossingTurns()),
                 counts.per100Km(counts.straightOns()))});
-        if (!plainOrder) {
+        if (!plainOrder && plainCounts.equals(counts)) {
+            text.add(new String[] {"", "the first order found had no more turns than any reorder tried: kept"});
+        } else if (!plainOrder) {
             text.add(new String[] {"", String.format(Locale.ROOT,
                     "reordered for fewer turns from %d U-turns, %d crossing turns, %d straight on; same length",
                     plainCounts.uTurns(), plainCounts.crossingTurns(), plainCounts.straightOns())});

@@ -32,6 +32,9 @@ import org.streetcomb.network.StreetNetwork;
  * <li>The circuit is opened at the start node where its costliest transition is, since the start and the
  * final arrival are not turns.</li>
  * </ol>
+ * An open route (from the depot to another end) is closed by a virtual traversal from its end back to its
+ * start whose transitions cost nothing; the circuit is then opened just after that traversal, so the route
+ * keeps its start and its end.
  * The service passes are then moved to the earliest passes that can carry them ({@link EarliestService}). Patching is a heuristic (the least-turn Euler tour is
  * NP-hard in general), so the result is kept only when it has no more U-turns, then no more crossing
  * turns, then no higher turn cost than the input; otherwise the input is returned unchanged.
@@ -43,9 +46,7 @@ public final class TurnAwareOrder {
     }
 
     public static Tour of(StreetNetwork network, EdgeBearings bearings, TrafficSide side, Tour tour) {
-        int m = tour.steps();
-        if (m < 3 || tour.end(network) != tour.start()) {
-            // the pairing below needs a closed walk; open routes keep the solver's order
+        if (tour.steps() < 3) {
             return tour;
         }
         Transitions transitions = new Transitions(network, bearings, side, tour);
@@ -67,17 +68,26 @@ public final class TurnAwareOrder {
         private final int[] leaving;
         private final int[] leavingStart;
         private final int[] nodes;
+        /** For an open route, the index of the virtual traversal from its end back to its start; else -1. */
+        private final int closing;
 
         Transitions(StreetNetwork network, EdgeBearings bearings, TrafficSide side, Tour tour) {
             this.tour = tour;
             this.bearings = bearings;
             this.side = side;
             int m = tour.steps();
-            int[] exit = new int[m];
-            int[] entry = new int[m];
+            int end = tour.end(network);
+            this.closing = end == tour.start() ? -1 : m;
+            int n = closing < 0 ? m : m + 1;
+            int[] exit = new int[n];
+            int[] entry = new int[n];
             for (int t = 0; t < m; t++) {
                 exit[t] = tour.exit(network, t);
                 entry[t] = tour.entry(network, t);
+            }
+            if (closing >= 0) {
+                exit[closing] = tour.start();
+                entry[closing] = end;
             }
             this.nodes = IntStream.of(exit).distinct().sorted().toArray();
             int[] index = new int[network.nodeCount()];
@@ -106,14 +116,21 @@ public final class TurnAwareOrder {
             return grouped;
         }
 
+        int count() {
+            return closing < 0 ? tour.steps() : tour.steps() + 1;
+        }
+
         double cost(int in, int out) {
+            if (in == closing || out == closing) {
+                return 0;
+            }
             return Turn.between(bearings, side, tour.edges()[in], tour.forward()[in], tour.edges()[out],
                     tour.forward()[out]).cost();
         }
 
         /** Step 1: the least-cost pairing of incoming with outgoing traversals at each node. */
         int[] assign() {
-            int[] successor = new int[tour.steps()];
+            int[] successor = new int[count()];
             for (int v = 0; v < nodes.length; v++) {
                 int from = arrivingStart[v];
                 int k = arrivingStart[v + 1] - from;
@@ -230,15 +247,16 @@ public final class TurnAwareOrder {
 
         /** Step 3: the circuit as a tour from the start node, opened at its costliest transition there. */
         Tour open(int[] successor) {
-            int m = successor.length;
-            int[] predecessor = new int[m];
-            for (int t = 0; t < m; t++) {
+            int n = successor.length;
+            int m = tour.steps();
+            int[] predecessor = new int[n];
+            for (int t = 0; t < n; t++) {
                 predecessor[successor[t]] = t;
             }
-            int first = -1;
+            int first = closing < 0 ? -1 : successor[closing];
             double worst = Double.NEGATIVE_INFINITY;
             int v = Arrays.binarySearch(nodes, tour.start());
-            for (int i = leavingStart[v]; i < leavingStart[v + 1]; i++) {
+            for (int i = leavingStart[v]; closing < 0 && i < leavingStart[v + 1]; i++) {
                 int t = leaving[i];
                 double c = cost(predecessor[t], t);
                 if (c > worst) {
@@ -255,7 +273,7 @@ public final class TurnAwareOrder {
                 forward[i] = tour.forward()[t];
                 service[i] = tour.service()[t];
             }
-            if (t != first) {
+            if (t != (closing < 0 ? first : closing)) {
                 throw new IllegalStateException("patched walk is not one circuit");
             }
             return EarliestService.of(new Tour(tour.start(), edges, forward, service));

@@ -14,7 +14,15 @@ import org.junit.jupiter.params.provider.MethodSource;
 import org.streetcomb.FieldFixtures;
 import org.streetcomb.network.LonLat;
 import org.streetcomb.network.StreetNetwork;
+import org.streetcomb.plan.Arrangement;
 import org.streetcomb.plan.Plan;
+import org.streetcomb.plan.PlanRequest;
+import org.streetcomb.plan.Planner;
+import org.streetcomb.plan.ServiceOptions;
+import org.streetcomb.read.ReadOptions;
+import org.streetcomb.solve.KerbMode;
+import org.streetcomb.solve.ServiceDemand;
+import org.streetcomb.timing.StageClock;
 
 /**
  * The turn-aware order against its baseline, the plain Hierholzer order of the same tour, on the demo
@@ -58,6 +66,33 @@ class TurnAwareOrderTest {
             after = after.plus(o);
         }
         assertTrue(after.uTurns() < before.uTurns(), "the reorder should find fewer U-turns on " + name);
+    }
+
+    /**
+     * An open route (the demo town's tour ending at the far side of the yard) keeps its start and its end,
+     * drives the same traversals, stays a valid walk and loses U-turns like a closed tour does.
+     */
+    @org.junit.jupiter.api.Test
+    void openRouteKeepsItsEndsAndLosesUTurns() {
+        ServiceOptions toEnd = new ServiceOptions(KerbMode.ONE_PASS, null, new LonLat(-31.18, 44.61), false);
+        Plan plan = Planner.plan(new PlanRequest(FieldFixtures.DEMO_TOWN, new LonLat(-31.2, 44.6), 0.5, 500, false,
+                ReadOptions.DEFAULTS, toEnd, new Arrangement(TrafficSide.RIGHT, false, null)),
+                new StageClock(StageClock.SILENT));
+        StreetNetwork network = plan.network();
+        EdgeBearings bearings = EdgeBearings.of(network);
+        Tour plain = plan.tours().get(0);
+        int end = plain.end(network);
+        assertTrue(end != plain.start(), "the fixture asks for an open route");
+        Tour ordered = TurnAwareOrder.of(network, bearings, TrafficSide.RIGHT, plain);
+        assertEquals(List.of(), TourValidator.problems(network, ordered, ServiceDemand.everyEdge(network),
+                plan.components().edgesByComponent(network)[plan.components().of(plain.start())], end));
+        assertEquals(plain.start(), ordered.start());
+        assertEquals(end, ordered.end(network));
+        assertArrayEquals(traversals(plain), traversals(ordered), "the same multiset of directed traversals");
+        assertServiceOnFirstPass(network, ordered);
+        int before = TurnCounts.of(network, bearings, TrafficSide.RIGHT, plain).uTurns();
+        int after = TurnCounts.of(network, bearings, TrafficSide.RIGHT, ordered).uTurns();
+        assertTrue(after < before, "U-turns " + before + " -> " + after);
     }
 
     /** Each traversal as edge and direction, sorted. */
