@@ -51,12 +51,14 @@ public final class DriveAudit {
         boolean[] scope = request.scope() == null ? null : scope(request, network, warnings);
         TrackCoverage coverage = clock.time("index", () -> new TrackCoverage(network, request.matching()));
         MatchTally tally = coverage.tally();
-        TrackExtent extent = new TrackExtent();
+        List<TrackExtent> extents = new ArrayList<>();
         List<TrackFileResult> files = clock.time("match", () -> {
             List<TrackFileResult> results = new ArrayList<>();
             for (Path file : request.tracks()) {
                 int matchedBefore = tally.matched();
                 int offBefore = tally.offNetwork();
+                TrackExtent extent = new TrackExtent();
+                extents.add(extent);
                 GpxContents contents = new GpxTrackReader().read(file, segment -> {
                     extent.add(segment);
                     seen.accept(segment);
@@ -66,7 +68,7 @@ public final class DriveAudit {
             }
             return results;
         });
-        checkOverlap(request, files, network, extent, warnings);
+        checkOverlap(request, files, network, extents, warnings);
         CoverageReport report = clock.time("account", () -> coverage.report(request.threshold(), request.bothKerbs(),
                 scope));
         return new Audit(request, layer.report(), List.copyOf(files), tally, report, List.copyOf(warnings));
@@ -95,7 +97,7 @@ public final class DriveAudit {
 
     /** Refuses tracks that miss the network entirely, and warns about single files that do. */
     private static void checkOverlap(AuditRequest request, List<TrackFileResult> files, StreetNetwork network,
-                                     TrackExtent extent, List<String> warnings) {
+                                     List<TrackExtent> extents, List<String> warnings) {
         int points = files.stream().mapToInt(f -> f.contents().points()).sum();
         if (points == 0) {
             throw new InputError(files.size() == 1
@@ -107,22 +109,46 @@ public final class DriveAudit {
             var layer = LocalFrame.covering(network);
             throw new InputError(String.format(Locale.ROOT,
                     "no track point could be placed on a street of %s: none of the %d points lies within %.0f m of a "
-                    + "street; the tracks are around %.5f,%.5f and the layer around %.5f,%.5f: check that they cover "
-                    + "the same place", request.layer().getFileName(), points, request.matching().radius(),
-                    extent.centreLon(), extent.centreLat(), layer.lon0(), layer.lat0()));
+                    + "street; %s, the layer around %.5f,%.5f: check that they cover the same place",
+                    request.layer().getFileName(), points, request.matching().radius(), whereTracksAre(files, extents),
+                    layer.lon0(), layer.lat0()));
         }
         for (TrackFileResult f : files) {
             if (f.contents().points() == 0) {
                 warnings.add(f.file() + ": no track points");
             } else if (f.matched() == 0) {
+                TrackExtent extent = extents.get(files.indexOf(f));
                 warnings.add(String.format(Locale.ROOT, "%s: none of its %d points could be placed on a street "
-                        + "(%d farther than %.0f m from every street)", f.file(), f.contents().points(), f.offNetwork(),
-                        request.matching().radius()));
+                        + "(%d farther than %.0f m from every street; the track is around %.5f,%.5f)", f.file(),
+                        f.contents().points(), f.offNetwork(), request.matching().radius(), extent.centreLon(),
+                        extent.centreLat()));
             }
         }
     }
 
-    /** The box around every fix read, for messages. */
+    /**
+     * Where each file's fixes are, for the message when none lies on the layer: a centre per file, since the
+     * centre of files far apart would lie between them, where no track is.
+     */
+    private static String whereTracksAre(List<TrackFileResult> files, List<TrackExtent> extents) {
+        List<String> places = new ArrayList<>();
+        int shown = 0;
+        for (int i = 0; i < files.size(); i++) {
+            if (files.get(i).contents().points() == 0) {
+                continue;
+            }
+            if (shown++ == 5) {
+                break;
+            }
+            places.add(String.format(Locale.ROOT, "%s around %.5f,%.5f", files.get(i).file().getFileName(),
+                    extents.get(i).centreLon(), extents.get(i).centreLat()));
+        }
+        long withPoints = files.stream().filter(f -> f.contents().points() > 0).count();
+        String more = withPoints > places.size() ? " and " + (withPoints - places.size()) + " more files" : "";
+        return (withPoints == 1 ? "the track is " : "the tracks are: ") + String.join("; ", places) + more;
+    }
+
+    /** The box around the fixes of one file, for messages. */
     private static final class TrackExtent {
         private double minLon = Double.POSITIVE_INFINITY;
         private double maxLon = Double.NEGATIVE_INFINITY;

@@ -218,6 +218,17 @@ class AuditCommandTest {
     }
 
     @Test
+    void tracksFarApartAreEachPlacedByName() {
+        // two real drives (gpxpy test data: Istria, Croatia, and the Cerknica lake, Slovenia) about 60 km
+        // apart: the message gives each file's place, never their midpoint, where neither drive was
+        Run r = run("audit", DEMO, "fixtures/gpx/around-visnjan-with-car.gpx", "fixtures/gpx/cerknicko-jezero.gpx");
+        assertEquals(ExitCode.BAD_INPUT, r.code());
+        assertTrue(r.err().contains("around-visnjan-with-car.gpx around 13.7"), r.err());
+        assertTrue(r.err().contains("cerknicko-jezero.gpx around 14.3"), r.err());
+        assertEquals(1, r.err().lines().count(), r.err());
+    }
+
+    @Test
     void aGpxWithADoctypeIsRefusedAndNothingIsWritten() throws IOException {
         Path bad = dir.resolve("entity.gpx");
         Files.writeString(bad, "<?xml version=\"1.0\"?>\n<!DOCTYPE gpx [<!ENTITY x SYSTEM \"file:///etc/passwd\">]>\n"
