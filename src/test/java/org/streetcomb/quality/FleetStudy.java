@@ -1,12 +1,11 @@
 package org.streetcomb.quality;
 
 import java.io.IOException;
-import java.nio.charset.StandardCharsets;
-import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
+import org.streetcomb.docs.GeneratedSection;
 import org.streetcomb.fleet.Fleet;
 import org.streetcomb.fleet.FleetPlanner;
 import org.streetcomb.fleet.FleetSettings;
@@ -41,8 +40,7 @@ import org.streetcomb.trip.TripPlanner;
  */
 public final class FleetStudy {
 
-    private static final String BEGIN = "<!-- fleet study: written by FleetStudy, do not edit by hand -->\n";
-    private static final String END = "<!-- end of fleet study -->\n";
+    static final GeneratedSection SECTION = new GeneratedSection("fleet study", "FleetStudy");
 
     private FleetStudy() {
     }
@@ -67,14 +65,7 @@ public final class FleetStudy {
             System.out.println(doc);
         }
         doc.append('\n');
-        Path out = Path.of("docs/quality.md");
-        String existing = Files.readString(out, StandardCharsets.UTF_8);
-        int begin = existing.indexOf(BEGIN);
-        int end = existing.indexOf(END);
-        String section = BEGIN + doc + END;
-        String written = begin < 0 || end < begin ? existing + "\n" + section
-                : existing.substring(0, begin) + section + existing.substring(end + END.length());
-        Files.writeString(out, written, StandardCharsets.UTF_8);
+        SECTION.write(Path.of("docs/quality.md"), doc.toString());
     }
 
     private static String row(String name, Path layer) {

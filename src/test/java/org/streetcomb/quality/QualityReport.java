@@ -12,6 +12,7 @@ import org.jgrapht.Graph;
 import org.jgrapht.alg.cycle.ChinesePostman;
 import org.jgrapht.graph.DefaultWeightedEdge;
 import org.jgrapht.graph.DirectedWeightedPseudograph;
+import org.streetcomb.docs.GeneratedSection;
 import org.streetcomb.network.CarplibNetwork;
 import org.streetcomb.network.Components;
 import org.streetcomb.network.StreetNetwork;
@@ -50,24 +51,13 @@ public final class QualityReport {
         report.run();
         Path out = Path.of(args.length > 0 ? args[0] : "docs/quality.md");
         Files.createDirectories(out.getParent());
-        String existing = Files.exists(out) ? Files.readString(out, StandardCharsets.UTF_8) : "";
-        Files.writeString(out, report.spliceInto(existing), StandardCharsets.UTF_8);
+        String existing = Files.exists(out) ? Files.readString(out, StandardCharsets.UTF_8)
+                : "# Solution quality on benchmark instances\n\n";
+        Files.writeString(out, SECTION.splice(existing, report.doc.toString()), StandardCharsets.UTF_8);
         System.out.println("written " + out);
     }
 
-    private static final String BEGIN = "<!-- postman quality: written by QualityReport, do not edit by hand -->\n";
-    private static final String END = "<!-- end of postman quality -->\n";
-
-    /** The document with this report between its markers; other sections of the file are kept. */
-    private String spliceInto(String existing) {
-        String section = BEGIN + doc + END;
-        int begin = existing.indexOf(BEGIN);
-        int end = existing.indexOf(END);
-        if (begin < 0 || end < begin) {
-            return "# Solution quality on benchmark instances\n\n" + section + "\n" + existing;
-        }
-        return existing.substring(0, begin) + section + existing.substring(end + END.length());
-    }
+    static final GeneratedSection SECTION = new GeneratedSection("postman quality", "QualityReport");
 
     private void run() throws IOException {
         List<String[]> values = Files.readAllLines(Path.of("fixtures/benchmarks/values.csv")).stream().skip(1)
