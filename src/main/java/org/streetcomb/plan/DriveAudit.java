@@ -109,7 +109,7 @@ public final class DriveAudit {
             var layer = LocalFrame.covering(network);
             throw new InputError(String.format(Locale.ROOT,
                     "no track point could be placed on a street of %s: none of the %d points lies within %.0f m of a "
-                    + "street; %s, the layer around %.5f,%.5f: check that they cover the same place",
+                    + "street; %s and the layer around %.5f,%.5f: check that they cover the same place",
                     request.layer().getFileName(), points, request.matching().radius(), whereTracksAre(files, extents),
                     layer.lon0(), layer.lat0()));
         }
@@ -132,20 +132,20 @@ public final class DriveAudit {
      */
     private static String whereTracksAre(List<TrackFileResult> files, List<TrackExtent> extents) {
         List<String> places = new ArrayList<>();
-        int shown = 0;
+        int withPoints = 0;
         for (int i = 0; i < files.size(); i++) {
-            if (files.get(i).contents().points() == 0) {
-                continue;
+            if (files.get(i).contents().points() > 0 && withPoints++ < 5) {
+                places.add(String.format(Locale.ROOT, "%s %.5f,%.5f", files.get(i).file().getFileName(),
+                        extents.get(i).centreLon(), extents.get(i).centreLat()));
             }
-            if (shown++ == 5) {
-                break;
-            }
-            places.add(String.format(Locale.ROOT, "%s around %.5f,%.5f", files.get(i).file().getFileName(),
-                    extents.get(i).centreLon(), extents.get(i).centreLat()));
         }
-        long withPoints = files.stream().filter(f -> f.contents().points() > 0).count();
+        if (withPoints == 1) {
+            int only = files.indexOf(files.stream().filter(f -> f.contents().points() > 0).findFirst().orElseThrow());
+            return String.format(Locale.ROOT, "%s lies around %.5f,%.5f", files.get(only).file().getFileName(),
+                    extents.get(only).centreLon(), extents.get(only).centreLat());
+        }
         String more = withPoints > places.size() ? " and " + (withPoints - places.size()) + " more files" : "";
-        return (withPoints == 1 ? "the track is " : "the tracks are: ") + String.join("; ", places) + more;
+        return "the tracks lie around " + String.join("; ", places) + more + ",";
     }
 
     /** The box around the fixes of one file, for messages. */
