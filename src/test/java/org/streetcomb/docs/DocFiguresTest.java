@@ -52,6 +52,19 @@ class DocFiguresTest {
         readme.says("and " + word(plan.at("/input/skipped/Point").asInt()) + " bus-stop points that the planner skips");
     }
 
+    /** The demo town's row of the health table in docs/health-check.md (the other rows read ../shared). */
+    @Test
+    void demoTownHealth() {
+        JsonNode health = json("health", DEMO, "--depot=-31.2,44.6", "--json");
+        JsonNode counts = health.get("counts");
+        Page.of("docs/health-check.md").says(String.format(Locale.ROOT, "| %s | `--depot=-31.2,44.6` | %d | %.1f | "
+                        + "crossing %d (notes: the High Street), duplicate %d (turning heads drawn over themselves), dropped "
+                        + "%d (%d bus-stop points) |", DEMO, health.at("/network/edges").asInt(),
+                health.at("/network/length_m").asDouble() / 1000, counts.get("crossing").asInt(),
+                counts.get("duplicate").asInt(), counts.get("dropped").asInt(),
+                health.at("/input/features").asInt() - health.at("/input/lines").asInt()));
+    }
+
     @Test
     void turnAwareOrder() {
         JsonNode demo = json("plan", DEMO, "--depot=-31.2,44.6", "--json");
