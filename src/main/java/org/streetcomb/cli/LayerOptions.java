@@ -93,6 +93,12 @@ public final class LayerOptions {
             description = "The line layer (table) to read from a GeoPackage that holds several.")
     String layer;
 
+    @Option(names = "--id-field", paramLabel = "FIELD", order = 117,
+            description = "Attribute holding each street's id, as your GIS knows it: used in messages, outputs and "
+                    + "--service-ids. Default: the layer's own id (FID counted from 0 as GDAL does for shapefiles and "
+                    + "GeoPackages, the GeoJSON feature id, way/N for OpenStreetMap).")
+    String idField;
+
     @CommandLine.Spec(CommandLine.Spec.Target.MIXEE)
     CommandLine.Model.CommandSpec mixee;
 
@@ -109,7 +115,7 @@ public final class LayerOptions {
         return new ReadOptions(nameField, onewayField,
                 values(onewayForward, d.onewayForward()), values(onewayBackward, d.onewayBackward()),
                 values(onewayBoth, d.onewayBoth()), keep, drop, requiredField, mode, serviceRoads, privateRoads, crs,
-                gradeSeparated || levelField != null, levelField, costField, layer);
+                gradeSeparated || levelField != null, levelField, costField, layer, idField);
     }
 
     private static Set<String> values(List<String> given, Set<String> defaults) {

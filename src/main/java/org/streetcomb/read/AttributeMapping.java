@@ -47,7 +47,8 @@ final class AttributeMapping {
      *
      * @param place where the feature is in the file, for an error message
      */
-    void keep(String id, Map<String, String> properties, List<LineString> lines, ReadTally tally, String place) {
+    void keep(String layerId, Map<String, String> properties, List<LineString> lines, ReadTally tally, String place) {
+        String id = id(layerId, properties, place);
         String name = properties.getOrDefault(options.nameField(), "");
         Travel travel = travel(properties, tally);
         boolean required = required(properties);
@@ -57,6 +58,21 @@ final class AttributeMapping {
             double share = total > 0 ? line.getLength() / total : 1.0 / lines.size();
             tally.keep(new RoadFeature(id, name, line, travel, required, properties, cost * share));
         }
+    }
+
+    /** The feature's id: the layer's own, or the value of the id field when one is named. */
+    String id(String layerId, Map<String, String> properties, String place) {
+        if (options.idField() == null) {
+            return layerId;
+        }
+        String value = properties.get(options.idField());
+        if (value == null || value.isBlank()) {
+            throw new InputError(place + ": id field " + options.idField() + " holds "
+                    + (value == null ? "nothing" : "only blanks") + ": --id-field needs a value for every street"
+                    + (properties.containsKey(options.idField()) ? "" : "; the feature's fields are "
+                    + String.join(", ", properties.keySet().stream().limit(12).toList())));
+        }
+        return value.trim();
     }
 
     /** The feature's cost from the cost field, or NaN when no cost field is named. */

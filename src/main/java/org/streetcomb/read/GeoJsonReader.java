@@ -107,8 +107,10 @@ public final class GeoJsonReader implements LayerReader {
         }
 
         void feature(JsonNode feature, int line) {
-            int number = tally.feature();
-            String place = "line " + line + " (feature " + number + ")";
+            // features are counted from 0, as GDAL counts a GeoJSON layer's FIDs, so a place or an id
+            // given here is the feature a user finds in desktop GIS
+            int fid = tally.feature() - 1;
+            String place = "line " + line + " (feature " + fid + ")";
             if (!feature.isObject()) {
                 throw InputError.at(file, place, "a feature must be a JSON object");
             }
@@ -127,7 +129,7 @@ public final class GeoJsonReader implements LayerReader {
             if (!mapping.keeps(properties, tally)) {
                 return;
             }
-            String id = featureId(feature, properties, number);
+            String id = featureId(feature, properties, fid);
             List<LineString> lines = new ArrayList<>();
             if (type.equals("LineString")) {
                 add(lines, coordinates, place);
@@ -141,12 +143,13 @@ public final class GeoJsonReader implements LayerReader {
             mapping.keep(id, properties, lines, tally, file + ": " + place);
         }
 
-        private String featureId(JsonNode feature, Map<String, String> properties, int number) {
+        /** The feature's id member, else an "id" property (both as GDAL takes them), else its FID. */
+        private String featureId(JsonNode feature, Map<String, String> properties, int fid) {
             JsonNode id = feature.get("id");
             if (id != null && (id.isTextual() || id.isNumber())) {
                 return id.asText();
             }
-            return properties.getOrDefault("id", "#" + number);
+            return properties.getOrDefault("id", String.valueOf(fid));
         }
 
         private void add(List<LineString> lines, JsonNode positions, String place) {

@@ -40,7 +40,7 @@ final class OsmReader implements LayerReader {
         this.pbf = pbf;
     }
 
-    private record Way(long id, long[] refs, Map<String, String> tags, Travel travel) {
+    private record Way(long id, long[] refs, Map<String, String> tags, Travel travel, String featureId) {
     }
 
     @Override
@@ -71,7 +71,8 @@ final class OsmReader implements LayerReader {
                 if (rules.timed(tags)) {
                     tally.note("oneway=" + tags.get("oneway") + " read as two-way: check the times on the ground");
                 }
-                ways.add(new Way(id, refs, Map.copyOf(kept), rules.travel(tags)));
+                ways.add(new Way(id, refs, Map.copyOf(kept), rules.travel(tags),
+                        mapping.id("way/" + id, kept, file + ": way " + id)));
                 for (long ref : refs) {
                     used.add(ref);
                 }
@@ -125,7 +126,7 @@ final class OsmReader implements LayerReader {
             boolean last = i == refs.length - 1 || !nodes.located(nodes.index(refs[i + 1]));
             if (nodes.uses(n) > 1 || last) {
                 if (piece.size() >= 2) {
-                    String id = "way/" + way.id();
+                    String id = way.featureId();
                     tally.keep(new RoadFeature(id, OsmRoadRules.name(way.tags()),
                             GEOMETRY.createLineString(piece.toArray(new Coordinate[0])), way.travel(),
                             mapping.required(way.tags()), way.tags()));

@@ -27,11 +27,14 @@ import java.util.Set;
  * @param costField       attribute giving each line's cost (travel minutes, say) to use as its weight instead
  *                        of its geodesic length, or null
  * @param layer           the table to read from a GeoPackage holding several line layers, or null
+ * @param idField         attribute whose value is each feature's id in messages, outputs and service lists,
+ *                        or null for the layer's own id (FID as GDAL counts it, GeoJSON id, OSM way/N)
  */
 public record ReadOptions(String nameField, String onewayField, Set<String> onewayForward, Set<String> onewayBackward,
                           Set<String> onewayBoth, List<FieldFilter> keep, List<FieldFilter> drop, String requiredField,
                           TravelMode mode, boolean serviceRoads, boolean privateRoads, String crs,
-                          boolean gradeSeparated, String levelField, String costField, String layer) {
+                          boolean gradeSeparated, String levelField, String costField, String layer,
+                          String idField) {
 
     /**
      * One-way encodings found in council layers and OpenStreetMap-derived exports (common practice):
@@ -43,7 +46,7 @@ public record ReadOptions(String nameField, String onewayField, Set<String> onew
     public static final Set<String> BOTH_VALUES = Set.of("no", "false", "0", "n", "b", "both", "");
 
     public static final ReadOptions DEFAULTS = new ReadOptions("name", "oneway", FORWARD_VALUES, BACKWARD_VALUES,
-            BOTH_VALUES, List.of(), List.of(), null, TravelMode.DRIVE, false, false, null, false, null, null, null);
+            BOTH_VALUES, List.of(), List.of(), null, TravelMode.DRIVE, false, false, null, false, null, null, null, null);
 
     public ReadOptions {
         onewayForward = lowerCase(onewayForward);
@@ -56,31 +59,37 @@ public record ReadOptions(String nameField, String onewayField, Set<String> onew
     /** These options with the layer's CRS stated. */
     public ReadOptions withCrs(String code) {
         return new ReadOptions(nameField, onewayField, onewayForward, onewayBackward, onewayBoth, keep, drop,
-                requiredField, mode, serviceRoads, privateRoads, code, gradeSeparated, levelField, costField, layer);
+                requiredField, mode, serviceRoads, privateRoads, code, gradeSeparated, levelField, costField, layer, idField);
     }
 
     /** These options with OpenStreetMap road selection for the mode, service roads and private roads. */
     public ReadOptions withRoads(TravelMode travelMode, boolean service, boolean privateAccess) {
         return new ReadOptions(nameField, onewayField, onewayForward, onewayBackward, onewayBoth, keep, drop,
-                requiredField, travelMode, service, privateAccess, crs, gradeSeparated, levelField, costField, layer);
+                requiredField, travelMode, service, privateAccess, crs, gradeSeparated, levelField, costField, layer, idField);
     }
 
     /** These options with grade separation, honouring {@code field} (or none when null) as the level. */
     public ReadOptions withGradeSeparation(String field) {
         return new ReadOptions(nameField, onewayField, onewayForward, onewayBackward, onewayBoth, keep, drop,
-                requiredField, mode, serviceRoads, privateRoads, crs, true, field, costField, layer);
+                requiredField, mode, serviceRoads, privateRoads, crs, true, field, costField, layer, idField);
     }
 
     /** These options with the cost of each line read from {@code field}. */
     public ReadOptions withCostField(String field) {
         return new ReadOptions(nameField, onewayField, onewayForward, onewayBackward, onewayBoth, keep, drop,
-                requiredField, mode, serviceRoads, privateRoads, crs, gradeSeparated, levelField, field, layer);
+                requiredField, mode, serviceRoads, privateRoads, crs, gradeSeparated, levelField, field, layer, idField);
+    }
+
+    /** These options taking each feature's id from {@code field}. */
+    public ReadOptions withIdField(String field) {
+        return new ReadOptions(nameField, onewayField, onewayForward, onewayBackward, onewayBoth, keep, drop,
+                requiredField, mode, serviceRoads, privateRoads, crs, gradeSeparated, levelField, costField, layer, field);
     }
 
     /** These options reading the named table of a GeoPackage. */
     public ReadOptions withLayer(String table) {
         return new ReadOptions(nameField, onewayField, onewayForward, onewayBackward, onewayBoth, keep, drop,
-                requiredField, mode, serviceRoads, privateRoads, crs, gradeSeparated, levelField, costField, table);
+                requiredField, mode, serviceRoads, privateRoads, crs, gradeSeparated, levelField, costField, table, idField);
     }
 
     private static Set<String> lowerCase(Set<String> values) {

@@ -89,7 +89,7 @@ class PlanCommandTest {
         "malformed JSON      | {\"type\":\"FeatureCollection\",\"features\":[{\"type\":\"Feature\",  | line 1, column",
         "points only         | {\"type\":\"FeatureCollection\",\"features\":[{\"type\":\"Feature\",\"properties\":{},\"geometry\":{\"type\":\"Point\",\"coordinates\":[1,2]}}]} | no road lines kept among 1 features (skipped: {Point=1})",
         "empty collection    | {\"type\":\"FeatureCollection\",\"features\":[]} | no features",
-        "latitude too big    | {\"type\":\"FeatureCollection\",\"features\":[{\"type\":\"Feature\",\"properties\":{},\"geometry\":{\"type\":\"LineString\",\"coordinates\":[[1,2],[3,95]]}}]} | line 1 (feature 1), position 2: latitude 95.0 outside [-90, 90]",
+        "latitude too big    | {\"type\":\"FeatureCollection\",\"features\":[{\"type\":\"Feature\",\"properties\":{},\"geometry\":{\"type\":\"LineString\",\"coordinates\":[[1,2],[3,95]]}}]} | line 1 (feature 0), position 2: latitude 95.0 outside [-90, 90]",
         "longitude too big   | {\"type\":\"FeatureCollection\",\"features\":[{\"type\":\"Feature\",\"properties\":{},\"geometry\":{\"type\":\"LineString\",\"coordinates\":[[181,2],[3,5]]}}]} | position 1: longitude 181.0 outside [-180, 180]",
         "NaN coordinate      | {\"type\":\"FeatureCollection\",\"features\":[{\"type\":\"Feature\",\"properties\":{},\"geometry\":{\"type\":\"LineString\",\"coordinates\":[[NaN,2],[3,5]]}}]} | malformed JSON",
         "not a collection    | {\"type\":\"Topology\"} | top-level type is \"Topology\"",
