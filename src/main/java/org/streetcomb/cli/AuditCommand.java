@@ -49,10 +49,10 @@ public final class AuditCommand implements Callable<Integer> {
     static final String TRACK_CAUTION = "Coverage is inferred from GPS tracks, which wander and drop out: check "
             + "doubtful streets on the ground before reporting them covered or missed.";
 
-    @Parameters(index = "0", paramLabel = "LAYER", description = "Road centrelines, the same layer the tour was planned on: GeoJSON, a shapefile (or a .zip holding one), a GeoPackage (.gpkg) or OpenStreetMap.")
+    @Parameters(index = "0", paramLabel = "LAYER", description = "Road centrelines, the same layer the tour was planned on: GeoJSON, a shapefile (or a .zip holding one), a GeoPackage (.gpkg) or OpenStreetMap; - reads it from standard input.")
     Path layerFile;
 
-    @Parameters(index = "1..*", arity = "1..*", paramLabel = "TRACK", description = "GPX files of the drive (tracks, any number of segments and days).")
+    @Parameters(index = "1..*", arity = "1..*", paramLabel = "TRACK", description = "GPX files of the drive (tracks, any number of segments and days); - reads one from standard input.")
     List<Path> tracks;
 
     @Option(names = "--covered-at", paramLabel = "SHARE", defaultValue = "0.9",
@@ -72,17 +72,17 @@ public final class AuditCommand implements Callable<Integer> {
     Path plan;
 
     @Option(names = "--streets-out", paramLabel = "FILE", description = "Write every street with its coverage status and share as GeoJSON.")
-    @Writes
+    @Writes(standardOutput = true)
     Path streetsOut;
 
     @Option(names = "--missed-out", paramLabel = "FILE", description = "Write the missed parts of streets as GeoJSON lines.")
-    @Writes
+    @Writes(standardOutput = true)
     Path missedOut;
 
     @Option(names = "--mop-up", paramLabel = "FILE",
             description = "Plan a tour that services only the missed parts and write it as GeoJSON; --gpx, --kml, "
                     + "--directions and the trip options write the same tour for the field.")
-    @Writes
+    @Writes(standardOutput = true)
     Path mopUpOut;
 
     @Option(names = "--mop-up-turn-back",
@@ -92,7 +92,7 @@ public final class AuditCommand implements Callable<Integer> {
 
     @Option(names = "--mop-up-ids", paramLabel = "FILE",
             description = "Write the ids of the streets not covered, one per line, for plan --service-ids.")
-    @Writes
+    @Writes(standardOutput = true)
     Path mopUpIds;
 
     @CommandLine.Mixin

@@ -32,7 +32,7 @@ import picocli.CommandLine.Parameters;
             "Exit code 0 when nothing blocks a tour, 4 when something does, 3 when the layer cannot be read."})
 public final class HealthCommand implements Callable<Integer> {
 
-    @Parameters(index = "0", paramLabel = "LAYER", description = "Road centrelines: GeoJSON (.geojson, .json), a shapefile (.shp, or a .zip holding one), a GeoPackage (.gpkg) or OpenStreetMap (.osm, .osm.gz, .osm.bz2, .osm.pbf).")
+    @Parameters(index = "0", paramLabel = "LAYER", description = "Road centrelines: GeoJSON (.geojson, .json), a shapefile (.shp, or a .zip holding one), a GeoPackage (.gpkg) or OpenStreetMap (.osm, .osm.gz, .osm.bz2, .osm.pbf); - reads it from standard input.")
     Path input;
 
     @CommandLine.Mixin
@@ -53,8 +53,8 @@ public final class HealthCommand implements Callable<Integer> {
             description = "Report two streets between the same junctions that lie this close (default: ${DEFAULT-VALUE} m).")
     double duplicate;
 
-    @Option(names = {"-o", "--out"}, paramLabel = "FILE", description = "Write the findings as a GeoJSON FeatureCollection.")
-    @Writes
+    @Option(names = {"-o", "--out"}, paramLabel = "FILE", description = "Write the findings as a GeoJSON FeatureCollection (- for standard output).")
+    @Writes(standardOutput = true)
     Path out;
 
     @Option(names = "--json", description = "Print the summary as JSON instead of text.")

@@ -1,5 +1,6 @@
 package org.streetcomb.cli;
 
+import java.io.InputStream;
 import java.io.PrintWriter;
 import org.streetcomb.ExitCode;
 import org.streetcomb.InputError;
@@ -32,9 +33,17 @@ public final class Main implements Runnable {
 
     /** Runs the command line with the given streams and returns the exit code. */
     public static int run(String[] args, PrintWriter stdout, PrintWriter stderr) {
-        // input data reach the terminal only with their control characters made visible
-        PrintWriter out = new PrintWriter(new TerminalSafeWriter(stdout), true);
-        PrintWriter err = new PrintWriter(new TerminalSafeWriter(stderr), true);
+        return run(args, System.in, stdout, stderr);
+    }
+
+    /** Runs the command line reading {@code -} from {@code stdin}, and returns the exit code. */
+    public static int run(String[] args, InputStream stdin, PrintWriter stdout, PrintWriter stderr) {
+        // input data reach the terminal only with their control characters made visible, and piped files are
+        // named "-" as the user named them
+        StandardStreams.Naming outNames = new StandardStreams.Naming(new TerminalSafeWriter(stdout));
+        StandardStreams.Naming errNames = new StandardStreams.Naming(new TerminalSafeWriter(stderr));
+        PrintWriter out = new PrintWriter(outNames, true);
+        PrintWriter err = new PrintWriter(errNames, true);
         CommandLine cli = new CommandLine(new Main());
         cli.setOut(out);
         cli.setErr(err);
@@ -64,15 +73,20 @@ public final class Main implements Runnable {
         // outputs are checked against inputs and each other before anything is read or written, and moved into
         // place together only when the command has written them all
         cli.setExecutionStrategy(parsed -> {
-            OutputGuard.check(parsed);
-            try (AtomicFile.Batch outputs = AtomicFile.batch()) {
-                int code = new CommandLine.RunLast().execute(parsed);
-                try {
-                    outputs.commit();
-                } catch (InputError e) {
-                    throw new CommandLine.ExecutionException(cli, e.getMessage(), e);
+            try (StandardStreams streams = standardStreams(cli, parsed, stdin)) {
+                outNames.use(streams);
+                errNames.use(streams);
+                OutputGuard.check(parsed);
+                try (AtomicFile.Batch outputs = AtomicFile.batch()) {
+                    int code = new CommandLine.RunLast().execute(parsed);
+                    try {
+                        outputs.commit();
+                    } catch (InputError e) {
+                        throw new CommandLine.ExecutionException(cli, e.getMessage(), e);
+                    }
+                    streams.deliver(stdout);
+                    return code;
                 }
-                return code;
             }
         });
         try {
@@ -86,6 +100,14 @@ public final class Main implements Runnable {
             err.println("streetcomb: out of memory (" + Runtime.getRuntime().maxMemory() / (1 << 20) + " MB heap): "
                     + "give Java more with JAVA_TOOL_OPTIONS=-Xmx8g, or plan a smaller extract");
             return ExitCode.INTERNAL;
+        }
+    }
+
+    private static StandardStreams standardStreams(CommandLine cli, CommandLine.ParseResult parsed, InputStream stdin) {
+        try {
+            return StandardStreams.attach(parsed, stdin);
+        } catch (InputError | java.io.UncheckedIOException e) {
+            throw new CommandLine.ExecutionException(cli, e.getMessage(), e);
         }
     }
 

@@ -31,14 +31,14 @@ public final class PlanCommand implements Callable<Integer> {
 
 
 
-    @Parameters(index = "0", paramLabel = "LAYER", description = "Road centrelines: GeoJSON (.geojson, .json), a shapefile (.shp, or a .zip holding one), a GeoPackage (.gpkg) or OpenStreetMap (.osm, .osm.gz, .osm.bz2, .osm.pbf).")
+    @Parameters(index = "0", paramLabel = "LAYER", description = "Road centrelines: GeoJSON (.geojson, .json), a shapefile (.shp, or a .zip holding one), a GeoPackage (.gpkg) or OpenStreetMap (.osm, .osm.gz, .osm.bz2, .osm.pbf); - reads it from standard input.")
     Path input;
 
     @CommandLine.Mixin
     DepotOptions depot;
 
-    @Option(names = {"-o", "--out"}, paramLabel = "FILE", description = "Write the tours as a GeoJSON FeatureCollection.")
-    @Writes
+    @Option(names = {"-o", "--out"}, paramLabel = "FILE", description = "Write the tours as a GeoJSON FeatureCollection (- for standard output; the summary then goes to standard error).")
+    @Writes(standardOutput = true)
     Path out;
 
     @Option(names = "--steps", description = "Also write one GeoJSON feature per step of each tour.")

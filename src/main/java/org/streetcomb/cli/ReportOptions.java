@@ -43,7 +43,7 @@ final class ReportOptions {
     @Option(names = "--report", paramLabel = "FILE.html",
             description = "Write one self-contained HTML page with a map of the result and its summary; it opens "
                     + "from disk with no network.")
-    @Writes
+    @Writes(standardOutput = true)
     Path html;
 
     @Option(names = "--quicklook", paramLabel = "FILE.png",

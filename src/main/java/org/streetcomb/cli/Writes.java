@@ -15,4 +15,7 @@ import java.lang.annotation.Target;
 
     /** The option names a folder the command writes files into, not a file. */
     boolean folder() default false;
+
+    /** The option writes one text file, which {@code -} sends to standard output ({@link StandardStreams}). */
+    boolean standardOutput() default false;
 }
