@@ -2,6 +2,7 @@ package org.streetcomb.docs;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
@@ -181,6 +182,51 @@ class DocFiguresTest {
         String message = err.toString().trim();
         String quoted = message.substring(message.indexOf("none of the"), message.indexOf(": check that"));
         Page.of("docs/quality.md").says("\"" + quoted + "\"");
+    }
+
+    /** docs/benchmarks.md: the sentences on the targets quote the tables docs/bench.sh and docs/mixed-bench.sh print. */
+    @Test
+    void benchmarkProse() {
+        Page bench = Page.of("docs/benchmarks.md");
+        List<String> hundredK = bench.row("100,438");
+        List<String> million = bench.row("997,387");
+        bench.says(String.format(Locale.ROOT, "Target: 100k edges end to end under 10 s: %s (%.1f s)",
+                Page.number(hundredK.get(6)) < 10 ? "met" : "not met", Page.number(hundredK.get(6))));
+        bench.says(String.format(Locale.ROOT, "the %.1f GiB peak at 1M", Page.number(million.get(7).replace(",", "")) / 1024));
+        List<String> mixed = bench.row("100,396");
+        bench.says(String.format(Locale.ROOT, "(%.0f s, %s MiB peak resident with a 2 GB heap, ratio %.0f)",
+                Page.number(mixed.get(2)), mixed.get(5), Page.number(mixed.get(4))));
+        double small = Page.number(bench.row("29,672").get(8));
+        double large = Page.number(bench.row("9,991").get(8));
+        bench.says(String.format(Locale.ROOT, "the certified gaps (%.1f %% to %.1f %% where the LP ran)", small, large));
+    }
+
+    /** docs/readers.md: the summary of the shapefile table is its largest warm / GeoJSON ratio. */
+    @Test
+    void readerProse() {
+        Page readers = Page.of("docs/readers.md");
+        double worst = 0;
+        for (String shapefile : new String[] {"shp-spearfish-roads-nad27-utm13n/roads.shp",
+                "shp-geodanet-streets-az-stateplane-ft/streets.shp", "shp-nyc-tiger-roads-wgs84/tiger_roads.shp",
+                "shp-aurich-osm-roads-dhdn-gk2/roads.shp"}) {
+            worst = Math.max(worst, Page.number(readers.row(shapefile).get(5)));
+        }
+        readers.says(String.format(Locale.ROOT, "Warm, every shapefile is %s the target (at most %.2f times its "
+                + "GeoJSON twin)", worst <= 1.5 ? "within" : "outside", worst));
+        readers.says("Its 18 one-way lines become " + readers.row("roads.shp", "956").get(4) + " one-way edges");
+    }
+
+    /** docs/report.md: "under a seventh of the audit" holds for the larger audits of its table. */
+    @Test
+    void auditReportProse() {
+        Page report = Page.of("docs/report.md");
+        double worst = 0;
+        for (List<String> row : List.of(report.row("grid", "9 660"), report.row("Vienna", "5 363"))) {
+            worst = Math.max(worst, Math.max(Page.number(row.get(4)), Page.number(row.get(6))));
+        }
+        assertTrue(worst > 0, "rows of the audit report table found");
+        assertTrue(worst < 1.0 / 7, "writing the report and the picture costs " + worst + " of the audit");
+        report.says("on the larger audits writing the report and the picture costs under a seventh of the audit");
     }
 
     /** The gate can fail: the trips sentence with its kilometres one unit off in the last digit printed. */
