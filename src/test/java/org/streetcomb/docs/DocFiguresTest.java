@@ -140,6 +140,28 @@ class DocFiguresTest {
                 + "of the flagged metres were skipped", percent(recallByLength), percent(precisionByLength)));
     }
 
+    /** The coverage study's reading of its own tables in docs/quality.md: odds, persisting noise, drift window. */
+    @Test
+    void coverageStudyProse() {
+        Page quality = Page.of("docs/quality.md");
+        List<String> oddsOne = quality.row("1", "...");
+        List<String> oddsTwenty = quality.row("20", "...");
+        quality.says(String.format(Locale.ROOT, "cut the false alarms from %s to %s for %d more skipped streets passed "
+                + "as driven", oddsOne.get(1), oddsTwenty.get(1), Integer.parseInt(oddsTwenty.get(2))
+                - Integer.parseInt(oddsOne.get(2))));
+        double shortMemory = Page.number(quality.row("Seoul", "10", "10").get(5));
+        double longMemory = Page.number(quality.row("Seoul", "10", "60").get(5));
+        quality.says(String.format(Locale.ROOT, "precision on the dense extract falls to %.2f–%.2f",
+                Math.min(shortMemory, longMemory), Math.max(shortMemory, longMemory)));
+        List<String> independentOff = quality.row("independent", "off");
+        List<String> independentOn = quality.row("independent", "60 s");
+        List<String> persistsOff = quality.row("persists, τ = 60 s", "off");
+        List<String> persistsOn = quality.row("persists, τ = 60 s", "60 s");
+        quality.says(String.format(Locale.ROOT, "It gains %d points of precision where the error persists and costs %d "
+                        + "where it does not", percent(Page.number(persistsOn.get(2)) - Page.number(persistsOff.get(2))),
+                percent(Page.number(independentOff.get(2)) - Page.number(independentOn.get(2)))));
+    }
+
     /** The mop-up's savings: README and the prose of docs/quality.md against the table MopUpStretchStudy writes. */
     @Test
     void mopUpSavings() {
