@@ -68,7 +68,7 @@ public final class DriveAudit {
             }
             return results;
         });
-        checkOverlap(request, files, network, extents, warnings);
+        checkOverlap(request, files, network, extents, tally, warnings);
         CoverageReport report = clock.time("account", () -> coverage.report(request.threshold(), request.bothKerbs(),
                 scope));
         return new Audit(request, layer.report(), List.copyOf(files), tally, report, List.copyOf(warnings));
@@ -97,7 +97,7 @@ public final class DriveAudit {
 
     /** Refuses tracks that miss the network entirely, and warns about single files that do. */
     private static void checkOverlap(AuditRequest request, List<TrackFileResult> files, StreetNetwork network,
-                                     List<TrackExtent> extents, List<String> warnings) {
+                                     List<TrackExtent> extents, MatchTally tally, List<String> warnings) {
         int points = files.stream().mapToInt(f -> f.contents().points()).sum();
         if (points == 0) {
             throw new InputError(files.size() == 1
@@ -105,6 +105,10 @@ public final class DriveAudit {
                     : "none of the " + files.size() + " GPX files holds a track point (<trkpt>): nothing to check");
         }
         int matched = files.stream().mapToInt(TrackFileResult::matched).sum();
+        int cleanedAway = tally.backwards() + tally.thinned() + tally.spikes();
+        if (matched == 0 && (tally.offNetwork() == 0 || tally.offNetwork() < points - cleanedAway)) {
+            throw new InputError(noDriveShown(request, files, tally, points));
+        }
         if (matched == 0) {
             var layer = LocalFrame.covering(network);
             throw new InputError(String.format(Locale.ROOT,
@@ -124,6 +128,37 @@ public final class DriveAudit {
                         extent.centreLat()));
             }
         }
+    }
+
+    /**
+     * The message when fixes lie near streets but none shows a drive along one: cleaning dropped them (a
+     * clock that does not move forward, a receiver standing still, spikes) or too few were left, so the
+     * message says which, instead of blaming the distance to the streets.
+     */
+    private static String noDriveShown(AuditRequest request, List<TrackFileResult> files, MatchTally tally, int points) {
+        List<String> reasons = new ArrayList<>();
+        if (tally.backwards() > 0) {
+            reasons.add(tally.backwards() + " have a time that does not move forward");
+        }
+        if (tally.thinned() > 0) {
+            reasons.add(tally.thinned() + " lie within half a sigma of the fix before (the receiver standing still)");
+        }
+        if (tally.spikes() > 0) {
+            reasons.add(tally.spikes() + " are speed spikes");
+        }
+        if (tally.offNetwork() > 0) {
+            reasons.add(String.format(Locale.ROOT, "%d lie farther than %.0f m from every street", tally.offNetwork(),
+                    request.matching().radius()));
+        }
+        int left = points - tally.backwards() - tally.thinned() - tally.spikes() - tally.offNetwork();
+        String named = files.stream().filter(f -> f.contents().points() > 0).limit(5)
+                .map(f -> f.file().getFileName().toString()).collect(java.util.stream.Collectors.joining(", "));
+        String kept = reasons.isEmpty() ? (points == 1 ? "a single point is" : "the " + points + " points are")
+                : "of the " + points + " points, " + String.join(", ", reasons) + ", and the " + Math.max(left, 0)
+                + " left " + (left == 1 ? "is" : "are");
+        return String.format(Locale.ROOT, "%s: no drive along a street of %s can be read from the track: %s too few "
+                        + "to follow a street; check the receiver's clock and that it recorded while moving", named,
+                request.layer().getFileName(), kept);
     }
 
     /**

@@ -228,6 +228,43 @@ class AuditCommandTest {
         assertEquals(1, r.err().lines().count(), r.err());
     }
 
+    /**
+     * Tracks on a street that show no drive get a message that says why, never "no point lies within 50 m":
+     * a receiver standing still, a clock running backwards, a single fix. Each names the file (hostile
+     * corpus, issue 14; the fixes lie on Tallow Street's first vertex and along it, invented demo data).
+     */
+    @Test
+    void tracksThatShowNoDriveAreToldTruthfully() throws IOException {
+        double[] from = {-31.2, 44.6};
+        double[] to = {-31.19, 44.6};
+        StringBuilder still = new StringBuilder();
+        StringBuilder backwards = new StringBuilder();
+        for (int i = 0; i < 60; i++) {
+            still.append(fix(from[0], from[1], i));
+            backwards.append(fix(from[0] + (to[0] - from[0]) * i / 59, from[1], 59 - i));
+        }
+        String[][] cases = {
+            {"still.gpx", still.toString(), "59 lie within half a sigma of the fix before"},
+            {"backwards.gpx", backwards.toString(), "59 have a time that does not move forward"},
+            {"single.gpx", fix(from[0], from[1], 0), "a single point is too few"}};
+        for (String[] c : cases) {
+            Path gpx = dir.resolve(c[0]);
+            Files.writeString(gpx, "<?xml version=\"1.0\"?><gpx version=\"1.1\" creator=\"test\" "
+                    + "xmlns=\"http://www.topografix.com/GPX/1/1\"><trk><trkseg>" + c[1] + "</trkseg></trk></gpx>");
+            Run r = run("audit", DEMO, gpx.toString());
+            assertEquals(ExitCode.BAD_INPUT, r.code(), r.err());
+            assertTrue(r.err().startsWith("streetcomb: " + c[0] + ": no drive along a street"), r.err());
+            assertTrue(r.err().contains(c[2]), r.err());
+            assertFalse(r.err().contains("within 50 m"), r.err());
+            assertEquals(1, r.err().lines().count(), r.err());
+        }
+    }
+
+    private static String fix(double lon, double lat, int minute) {
+        return String.format(java.util.Locale.ROOT, "<trkpt lat=\"%.7f\" lon=\"%.7f\"><time>2026-01-01T10:%02d:00Z</time></trkpt>",
+                lat, lon, minute);
+    }
+
     @Test
     void aGpxWithADoctypeIsRefusedAndNothingIsWritten() throws IOException {
         Path bad = dir.resolve("entity.gpx");
