@@ -19,8 +19,8 @@ import picocli.CommandLine.Command;
         exitCodeList = {
             "0:success",
             "1:internal error (a bug: please report it with the stack trace)",
-            "2:the command line is wrong",
-            "3:an input file or option value is bad",
+            "2:the command line is wrong on its face (unknown option, value not a number or out of range, output over an input)",
+            "3:an input file is bad, or an option does not fit the data (depot far from the streets, missing field)",
             "4:no tour can be planned on this input"})
 public final class Main implements Runnable {
 
@@ -47,6 +47,11 @@ public final class Main implements Runnable {
         CommandLine cli = new CommandLine(new Main());
         cli.setOut(out);
         cli.setErr(err);
+        // every command's --help states the one exit-code rule, as the README does
+        for (CommandLine sub : cli.getSubcommands().values()) {
+            sub.getCommandSpec().usageMessage().exitCodeListHeading("%nExit codes:%n")
+                    .exitCodeList(cli.getCommandSpec().usageMessage().exitCodeList());
+        }
         // a mistake on the command line gets one line and a pointer to the help, not the whole option list
         cli.setParameterExceptionHandler((e, arguments) -> {
             err.println("streetcomb: " + e.getMessage());

@@ -37,6 +37,25 @@ class PlanCommandTest {
         return new Run(code, out.toString(), err.toString());
     }
 
+    /** One exit-code rule: every command's --help lists the codes the README's table gives, in the same words' sense. */
+    @Test
+    void everyHelpStatesTheExitCodesOfTheReadme() throws IOException {
+        String readme = Files.readString(Path.of("README.md"));
+        for (String command : new String[] {"plan", "health", "audit", "districts"}) {
+            Run help = run(command, "--help");
+            assertEquals(ExitCode.OK, help.code());
+            for (int code = 0; code <= 4; code++) {
+                assertTrue(help.out().matches("(?s).*\\n\\s+" + code + "\\s+\\S.*"), command + " --help lists exit code " + code);
+                assertTrue(readme.contains("| " + code + " | "), "README's table lists exit code " + code);
+            }
+            assertTrue(help.out().replaceAll("\\s+", " ").contains("value not a number or out of range"), command + ": bad values exit 2");
+        }
+        Run bad = run("plan", DEMO, "--snap", "abc");
+        assertEquals(ExitCode.USAGE, bad.code(), "a value that is not a number is exit 2, as README says");
+        Run unfit = run("plan", DEMO, "--depot=10,10");
+        assertEquals(ExitCode.BAD_INPUT, unfit.code(), "a depot far from every street is exit 3, as README says");
+    }
+
     @Test
     void demoTourIsOneClosedLineFromTheDepotWhoseLengthMatchesTheSummary() throws IOException {
         Path tour = dir.resolve("tour.geojson");
