@@ -48,6 +48,9 @@ final class HealthSummary {
         input.put("file", report.input().toString());
         input.put("features", report.read().featuresRead());
         input.put("lines", report.read().linesKept());
+        input.put("crs", report.read().sourceCrs());
+        ObjectNode notes = input.putObject("notes");
+        report.read().notes().forEach(notes::put);
         ObjectNode net = json.putObject("network");
         net.put("edges", network.edgeCount());
         net.put("nodes", network.nodeCount());
@@ -86,6 +89,8 @@ final class HealthSummary {
     private void buildText(HealthReport report, List<StageClock.Stage> stages, Path out) {
         StreetNetwork network = report.network();
         line("Layer", "%s: %d features, %d road lines", report.input(), report.read().featuresRead(), report.read().linesKept());
+        line("CRS", "%s", report.read().sourceCrs());
+        report.read().notes().forEach((what, n) -> line("Note", "%d x %s", n, what));
         line("Network", "%.3f km in %d edges, %d nodes", network.totalLength() / 1000, network.edgeCount(), network.nodeCount());
         if (report.depot() >= 0) {
             line("Depot", "node %d at %.7f,%.7f", report.depot(), network.lon(report.depot()), network.lat(report.depot()));

@@ -23,6 +23,16 @@ class HealthCommandTest {
     @TempDir
     Path folder;
 
+    /** A --crs that disagrees with the .prj is said in health's summary too, not only in plan's (issue 14). */
+    @Test
+    void aCrsThatOverridesThePrjIsNoted() {
+        StringWriter stdout = new StringWriter();
+        int code = Main.run(new String[] {"health", "fixtures/shapefiles/mesa-az-stateplane-ft/streets.shp", "--crs",
+                "EPSG:26912"}, new PrintWriter(stdout), new PrintWriter(new StringWriter()));
+        assertEquals(ExitCode.OK, code);
+        assertTrue(stdout.toString().contains("Note      1 x --crs EPSG:26912 overrides the .prj"), stdout.toString());
+    }
+
     @Test
     void writesFindingsAsGeoJsonAndExitsZeroWithoutBlockingFindings() throws Exception {
         Path out = folder.resolve("findings.geojson");
