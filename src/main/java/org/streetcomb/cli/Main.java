@@ -54,7 +54,7 @@ public final class Main implements Runnable {
         }
         // a mistake on the command line gets one line and a pointer to the help, not the whole option list
         cli.setParameterExceptionHandler((e, arguments) -> {
-            err.println("streetcomb: " + e.getMessage());
+            err.println("streetcomb: " + oneLine(e.getMessage()));
             if (e instanceof OutputGuard.Clash) {
                 return ExitCode.USAGE;
             }
@@ -64,11 +64,11 @@ public final class Main implements Runnable {
         });
         cli.setExecutionExceptionHandler((e, commandLine, parseResult) -> {
             if (e instanceof InputError) {
-                err.println("streetcomb: " + e.getMessage());
+                err.println("streetcomb: " + oneLine(e.getMessage()));
                 return ExitCode.BAD_INPUT;
             }
             if (e instanceof NoTourError) {
-                err.println("streetcomb: no tour: " + e.getMessage());
+                err.println("streetcomb: no tour: " + oneLine(e.getMessage()));
                 return ExitCode.NO_TOUR;
             }
             err.println("streetcomb: internal error, please report it with what follows:");
@@ -114,6 +114,11 @@ public final class Main implements Runnable {
         } catch (InputError | java.io.UncheckedIOException e) {
             throw new CommandLine.ExecutionException(cli, e.getMessage(), e);
         }
+    }
+
+    /** A message on one line: line breaks in data it quotes are shown as \\n, as the data has them. */
+    static String oneLine(String message) {
+        return String.valueOf(message).replace("\r", "\\r").replace("\n", "\\n");
     }
 
     @Override

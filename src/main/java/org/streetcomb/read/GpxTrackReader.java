@@ -72,7 +72,7 @@ public final class GpxTrackReader {
             }
         } catch (XMLStreamException e) {
             String place = e.getLocation() == null ? null : "line " + e.getLocation().getLineNumber();
-            throw InputError.at(file, place, "not well-formed XML: " + firstLine(e.getMessage()));
+            throw InputError.at(file, place, "not well-formed XML: " + XmlReason.of(e.getMessage()));
         } catch (IOException e) {
             throw InputError.at(file, null, "cannot read: " + e.getMessage());
         }
@@ -85,14 +85,6 @@ public final class GpxTrackReader {
         factory.setProperty(XMLInputFactory.IS_SUPPORTING_EXTERNAL_ENTITIES, false);
         factory.setProperty(XMLInputFactory.IS_REPLACING_ENTITY_REFERENCES, false);
         return factory;
-    }
-
-    private static String firstLine(String message) {
-        if (message == null) {
-            return "";
-        }
-        String trimmed = message.replaceFirst("(?s)^ParseError at \\[row,col\\]:\\[\\d+,\\d+\\]\\s*Message:\\s*", "");
-        return trimmed.lines().findFirst().orElse("").trim();
     }
 
     /** A track's name on one line, at most {@value #NAME_LENGTH} characters, for messages and maps. */

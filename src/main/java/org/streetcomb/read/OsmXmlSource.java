@@ -50,10 +50,14 @@ final class OsmXmlSource implements OsmSource {
             xml = safeFactory().createXMLStreamReader(in);
             read(xml, sink, nodes, ways);
         } catch (XMLStreamException e) {
+            if (e.getNestedException() instanceof IOException damaged) {
+                // the parser met a read error of the decompressing stream beneath it
+                throw InputError.at(file, null, "cannot read: " + InputError.inWords(damaged)
+                        + (file.toString().endsWith(".osm") ? "" : " (the compressed data are damaged)"));
+            }
             Location at = e.getLocation();
             throw InputError.at(file, at == null ? null : "line " + at.getLineNumber() + ", column " + at.getColumnNumber(),
-                    "malformed OSM XML: " + e.getMessage().replaceAll("(?s)^ParseError at \\[[^]]*]\\s*Message: ", "")
-                            .lines().findFirst().orElse(""));
+                    "malformed OSM XML: " + XmlReason.of(e.getMessage()));
         } catch (IOException e) {
             throw InputError.at(file, null, "cannot read: " + e.getMessage());
         } finally {

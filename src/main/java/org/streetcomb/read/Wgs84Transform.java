@@ -235,6 +235,9 @@ final class Wgs84Transform {
         return flat;
     }
 
+    /** Largest absolute coordinate value read in any coordinate reference system. */
+    static final double MAX_PROJECTED = 1e9;
+
     /** Transforms {@code count} x,y pairs in place to longitude,latitude. */
     void transform(double[] xy, int count) {
         if (transform == null) {
@@ -252,7 +255,19 @@ final class Wgs84Transform {
      * refusing a point that lands off the globe (the usual sign of a wrong CRS).
      */
     Coordinate[] lonLat(double[] xy, int count, Object file, String place) {
-        transform(xy, count);
+        for (int i = 0; i < 2 * count; i++) {
+            // no projection of the earth reaches a billion units (its circumference is 1.3e8 feet), so larger
+            // values are damage, refused before a projection library is handed them
+            if (!(Math.abs(xy[i]) <= MAX_PROJECTED)) {
+                throw InputError.at(file, place + ", point " + (i / 2 + 1), "coordinate " + xy[i]
+                        + " is no place on the earth in any coordinate reference system: the geometry is damaged");
+            }
+        }
+        try {
+            transform(xy, count);
+        } catch (InputError e) {
+            throw InputError.at(file, place, e.getMessage());
+        }
         Coordinate[] coords = new Coordinate[count];
         for (int i = 0; i < count; i++) {
             double lon = xy[2 * i];
