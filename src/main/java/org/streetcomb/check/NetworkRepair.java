@@ -48,7 +48,7 @@ public final class NetworkRepair {
                         gaps.size() == 1 ? "" : "s", gaps.stream().mapToDouble(UndershootCheck.Gap::metres).max().orElse(0),
                         Places.list(ids, 5)));
                 layer = new RoadLayer(layer.source(), closed(layer.features(), network, gaps), layer.report(),
-                        layer.endNodes(), layer.gradeSeparation());
+                        layer.endNodes(), layer.gradeSeparation(), layer.crossingLimit());
                 network = new NetworkBuilder(snap).build(layer);
             }
         }

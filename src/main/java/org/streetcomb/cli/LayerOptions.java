@@ -99,6 +99,12 @@ public final class LayerOptions {
                     + "GeoPackages, the GeoJSON feature id, way/N for OpenStreetMap).")
     String idField;
 
+    @Option(names = "--crossing-limit", paramLabel = "N", order = 118, defaultValue = "-1",
+            description = "Most places where lines cross mid-segment that noding may split at, a guard against "
+                    + "damaged geometry whose noding would explode; default: 20 per segment of the layer plus "
+                    + "10,000; 0: no limit.")
+    long crossingLimit;
+
     @CommandLine.Spec(CommandLine.Spec.Target.MIXEE)
     CommandLine.Model.CommandSpec mixee;
 
@@ -115,7 +121,7 @@ public final class LayerOptions {
         return new ReadOptions(nameField, onewayField,
                 values(onewayForward, d.onewayForward()), values(onewayBackward, d.onewayBackward()),
                 values(onewayBoth, d.onewayBoth()), keep, drop, requiredField, mode, serviceRoads, privateRoads, crs,
-                gradeSeparated || levelField != null, levelField, costField, layer, idField);
+                gradeSeparated || levelField != null, levelField, costField, layer, idField, crossingLimit);
     }
 
     private static Set<String> values(List<String> given, Set<String> defaults) {

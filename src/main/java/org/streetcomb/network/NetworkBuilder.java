@@ -5,6 +5,7 @@ import java.util.Arrays;
 import java.util.Collection;
 import java.util.HashMap;
 import java.util.List;
+import java.util.Locale;
 import java.util.Map;
 import java.util.stream.IntStream;
 import org.locationtech.jts.geom.Coordinate;
@@ -12,6 +13,7 @@ import org.locationtech.jts.geom.LineString;
 import org.locationtech.jts.noding.NodedSegmentString;
 import org.locationtech.jts.noding.SegmentString;
 import org.locationtech.jts.noding.snap.SnappingNoder;
+import org.streetcomb.InputError;
 import org.streetcomb.read.RoadFeature;
 import org.streetcomb.read.RoadLayer;
 
@@ -50,10 +52,15 @@ public final class NetworkBuilder {
             return joinByNodeIds(layer.features(),
                     SharedVertexJoin.split(layer.features(), snapTolerance, layer.gradeSeparation().levelField()));
         }
-        return build(layer.features());
+        return build(layer.features(), layer.crossingLimit(), layer.source());
     }
 
+    /** Nodes the lines with the default crossing limit. */
     public StreetNetwork build(List<RoadFeature> features) {
+        return build(features, RoadLayer.AUTOMATIC_CROSSINGS, "the layer");
+    }
+
+    private StreetNetwork build(List<RoadFeature> features, long crossingLimit, Object source) {
         LocalFrame frame = LocalFrame.covering(features);
         List<SegmentString> input = new ArrayList<>(features.size());
         for (int f = 0; f < features.size(); f++) {
@@ -65,11 +72,40 @@ public final class NetworkBuilder {
             }
             input.add(new NodedSegmentString(projected, f));
         }
+        refuseExplosion(input, crossingLimit, source, frame);
         SnappingNoder noder = new SnappingNoder(snapTolerance);
         noder.computeNodes(input);
         @SuppressWarnings("unchecked")
         Collection<SegmentString> pieces = noder.getNodedSubstrings();
         return assemble(pieces, frame, features);
+    }
+
+    /**
+     * Refuses, before noding, lines that cross each other mid-segment far more often than street layers do
+     * (damaged geometry: zig-zags, a line digitised over and over), whose noding would take minutes and
+     * gigabytes. The default limit, 20 crossings per segment plus 10,000, is far above real layers: their
+     * junctions are mostly shared vertices, and the shared layers cross under one time per segment.
+     */
+    private static void refuseExplosion(List<SegmentString> input, long crossingLimit, Object source, LocalFrame frame) {
+        if (crossingLimit == 0) {
+            return;
+        }
+        long segments = input.stream().mapToLong(line -> line.size() - 1).sum();
+        long limit = crossingLimit > 0 ? crossingLimit : automaticCrossingLimit(segments);
+        CrossingCount.Result found = CrossingCount.upTo(input, limit);
+        if (found.crossings() > limit) {
+            throw InputError.at(source, null, String.format(Locale.ROOT, "its lines cross each other mid-segment more "
+                    + "than %d times among %d segments (the first near %.5f,%.5f), so noding would split them into "
+                    + "millions of pieces; damaged geometry (zig-zags, a line drawn over and over) is the usual cause: "
+                    + "check it, or use --grade-separated if lines meet only at shared vertices, or raise "
+                    + "--crossing-limit (0: no limit)", limit, segments, frame.lon(found.first().x),
+                    frame.lat(found.first().y)));
+        }
+    }
+
+    /** The default crossing limit for a layer of {@code segments} segments. */
+    static long automaticCrossingLimit(long segments) {
+        return 20 * segments + 10_000;
     }
 
     private static StreetNetwork assemble(Collection<SegmentString> pieces, LocalFrame frame, List<RoadFeature> features) {

@@ -20,7 +20,8 @@ public final class LayerReaders {
             throw InputError.at(file, null, "no such file");
         }
         RoadLayer layer = forFile(file, options).read(file);
-        return options.gradeSeparated() && !layer.hasTopology() ? layer.gradeSeparated(options.levelField()) : layer;
+        RoadLayer read = options.gradeSeparated() && !layer.hasTopology() ? layer.gradeSeparated(options.levelField()) : layer;
+        return read.withCrossingLimit(options.crossingLimit());
     }
 
     static LayerReader forFile(Path file, ReadOptions options) {

@@ -29,12 +29,14 @@ import java.util.Set;
  * @param layer           the table to read from a GeoPackage holding several line layers, or null
  * @param idField         attribute whose value is each feature's id in messages, outputs and service lists,
  *                        or null for the layer's own id (FID as GDAL counts it, GeoJSON id, OSM way/N)
+ * @param crossingLimit   most crossings noding may split at ({@link RoadLayer#AUTOMATIC_CROSSINGS}: the
+ *                        default; 0: no limit)
  */
 public record ReadOptions(String nameField, String onewayField, Set<String> onewayForward, Set<String> onewayBackward,
                           Set<String> onewayBoth, List<FieldFilter> keep, List<FieldFilter> drop, String requiredField,
                           TravelMode mode, boolean serviceRoads, boolean privateRoads, String crs,
                           boolean gradeSeparated, String levelField, String costField, String layer,
-                          String idField) {
+                          String idField, long crossingLimit) {
 
     /**
      * One-way encodings found in council layers and OpenStreetMap-derived exports (common practice):
@@ -46,7 +48,7 @@ public record ReadOptions(String nameField, String onewayField, Set<String> onew
     public static final Set<String> BOTH_VALUES = Set.of("no", "false", "0", "n", "b", "both", "");
 
     public static final ReadOptions DEFAULTS = new ReadOptions("name", "oneway", FORWARD_VALUES, BACKWARD_VALUES,
-            BOTH_VALUES, List.of(), List.of(), null, TravelMode.DRIVE, false, false, null, false, null, null, null, null);
+            BOTH_VALUES, List.of(), List.of(), null, TravelMode.DRIVE, false, false, null, false, null, null, null, null, RoadLayer.AUTOMATIC_CROSSINGS);
 
     public ReadOptions {
         onewayForward = lowerCase(onewayForward);
@@ -59,37 +61,44 @@ public record ReadOptions(String nameField, String onewayField, Set<String> onew
     /** These options with the layer's CRS stated. */
     public ReadOptions withCrs(String code) {
         return new ReadOptions(nameField, onewayField, onewayForward, onewayBackward, onewayBoth, keep, drop,
-                requiredField, mode, serviceRoads, privateRoads, code, gradeSeparated, levelField, costField, layer, idField);
+                requiredField, mode, serviceRoads, privateRoads, code, gradeSeparated, levelField, costField, layer, idField, crossingLimit);
     }
 
     /** These options with OpenStreetMap road selection for the mode, service roads and private roads. */
     public ReadOptions withRoads(TravelMode travelMode, boolean service, boolean privateAccess) {
         return new ReadOptions(nameField, onewayField, onewayForward, onewayBackward, onewayBoth, keep, drop,
-                requiredField, travelMode, service, privateAccess, crs, gradeSeparated, levelField, costField, layer, idField);
+                requiredField, travelMode, service, privateAccess, crs, gradeSeparated, levelField, costField, layer, idField, crossingLimit);
     }
 
     /** These options with grade separation, honouring {@code field} (or none when null) as the level. */
     public ReadOptions withGradeSeparation(String field) {
         return new ReadOptions(nameField, onewayField, onewayForward, onewayBackward, onewayBoth, keep, drop,
-                requiredField, mode, serviceRoads, privateRoads, crs, true, field, costField, layer, idField);
+                requiredField, mode, serviceRoads, privateRoads, crs, true, field, costField, layer, idField, crossingLimit);
     }
 
     /** These options with the cost of each line read from {@code field}. */
     public ReadOptions withCostField(String field) {
         return new ReadOptions(nameField, onewayField, onewayForward, onewayBackward, onewayBoth, keep, drop,
-                requiredField, mode, serviceRoads, privateRoads, crs, gradeSeparated, levelField, field, layer, idField);
+                requiredField, mode, serviceRoads, privateRoads, crs, gradeSeparated, levelField, field, layer, idField, crossingLimit);
     }
 
     /** These options taking each feature's id from {@code field}. */
     public ReadOptions withIdField(String field) {
         return new ReadOptions(nameField, onewayField, onewayForward, onewayBackward, onewayBoth, keep, drop,
-                requiredField, mode, serviceRoads, privateRoads, crs, gradeSeparated, levelField, costField, layer, field);
+                requiredField, mode, serviceRoads, privateRoads, crs, gradeSeparated, levelField, costField, layer, field, crossingLimit);
+    }
+
+    /** These options noding at most {@code limit} crossings (0: no limit). */
+    public ReadOptions withCrossingLimit(long limit) {
+        return new ReadOptions(nameField, onewayField, onewayForward, onewayBackward, onewayBoth, keep, drop,
+                requiredField, mode, serviceRoads, privateRoads, crs, gradeSeparated, levelField, costField, layer,
+                idField, limit);
     }
 
     /** These options reading the named table of a GeoPackage. */
     public ReadOptions withLayer(String table) {
         return new ReadOptions(nameField, onewayField, onewayForward, onewayBackward, onewayBoth, keep, drop,
-                requiredField, mode, serviceRoads, privateRoads, crs, gradeSeparated, levelField, costField, table, idField);
+                requiredField, mode, serviceRoads, privateRoads, crs, gradeSeparated, levelField, costField, table, idField, crossingLimit);
     }
 
     private static Set<String> lowerCase(Set<String> values) {

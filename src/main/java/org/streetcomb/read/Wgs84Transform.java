@@ -196,7 +196,11 @@ final class Wgs84Transform {
         String name = source.getName().getCode();
         try {
             DefaultGeographicBoundingBox area = null;
-            if (minX <= maxX && minY <= maxY) {
+            // a layer's extent narrows the choice of datum shift; a damaged one (a header's box beyond any
+            // place on the earth) is not used, since the projection library would be handed nonsense
+            boolean sane = Math.max(Math.max(Math.abs(minX), Math.abs(maxX)), Math.max(Math.abs(minY), Math.abs(maxY)))
+                    <= MAX_PROJECTED;
+            if (sane && minX <= maxX && minY <= maxY) {
                 GeneralEnvelope extent = new GeneralEnvelope(eastNorth);
                 extent.setRange(0, minX, maxX);
                 extent.setRange(1, minY, maxY);

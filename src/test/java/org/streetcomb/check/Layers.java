@@ -44,7 +44,8 @@ final class Layers {
     }
 
     static List<Finding> check(RoadLayer layer, List<RoadFeature> features, int depot) {
-        RoadLayer lines = new RoadLayer(layer.source(), features, layer.report(), layer.endNodes(), layer.gradeSeparation());
+        RoadLayer lines = new RoadLayer(layer.source(), features, layer.report(), layer.endNodes(), layer.gradeSeparation(),
+                layer.crossingLimit());
         StreetNetwork network = new NetworkBuilder(CheckOptions.DEFAULTS.snap()).build(lines);
         return NetworkCheck.run(new CheckInput(lines, network, CheckOptions.DEFAULTS, depot));
     }

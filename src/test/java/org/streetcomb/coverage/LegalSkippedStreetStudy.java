@@ -208,6 +208,7 @@ final class LegalSkippedStreetStudy {
             kept.add(f);
         }
         return new RoadLayer(layer.source(), kept, layer.report(),
-                ends == null ? null : java.util.Arrays.copyOf(ends, 2 * kept.size()), layer.gradeSeparation());
+                ends == null ? null : java.util.Arrays.copyOf(ends, 2 * kept.size()), layer.gradeSeparation(),
+                layer.crossingLimit());
     }
 }

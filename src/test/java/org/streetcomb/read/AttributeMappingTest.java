@@ -53,7 +53,7 @@ class AttributeMappingTest {
         ReadOptions d = ReadOptions.DEFAULTS;
         ReadOptions options = new ReadOptions("STREET", "DIR", Set.of("w"), Set.of("A"), Set.of(""),
                 List.of(), List.of(new ReadOptions.FieldFilter("CLASS", Set.of("PRIVATE"))), "GRIT",
-                d.mode(), false, false, null, false, null, null, null, null);
+                d.mode(), false, false, null, false, null, null, null, null, RoadLayer.AUTOMATIC_CROSSINGS);
         RoadLayer read = LayerReaders.read(file, options);
         assertEquals(List.of("Mill Lane", "Quarry Road"), read.features().stream().map(RoadFeature::name).toList());
         assertEquals(List.of(Travel.FORWARD, Travel.BACKWARD), read.features().stream().map(RoadFeature::travel).toList());
@@ -68,7 +68,7 @@ class AttributeMappingTest {
         ReadOptions d = ReadOptions.DEFAULTS;
         ReadOptions options = new ReadOptions(d.nameField(), d.onewayField(), d.onewayForward(), d.onewayBackward(),
                 d.onewayBoth(), List.of(new ReadOptions.FieldFilter("a", Set.of("1")), new ReadOptions.FieldFilter("b", Set.of("x"))),
-                List.of(), null, d.mode(), false, false, null, false, null, null, null, null);
+                List.of(), null, d.mode(), false, false, null, false, null, null, null, null, RoadLayer.AUTOMATIC_CROSSINGS);
         RoadLayer read = LayerReaders.read(file, options);
         assertEquals(1, read.features().size());
         assertFalse(read.report().skippedByType().isEmpty());
