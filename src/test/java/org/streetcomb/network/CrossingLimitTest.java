@@ -16,10 +16,14 @@ import java.util.List;
 import java.util.Locale;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
+import org.locationtech.jts.geom.Coordinate;
+import org.locationtech.jts.noding.NodedSegmentString;
+import org.locationtech.jts.noding.SegmentString;
 import org.streetcomb.ExitCode;
 import org.streetcomb.InputError;
 import org.streetcomb.TestNetworks;
 import org.streetcomb.cli.Main;
+import org.streetcomb.read.LayerReaders;
 import org.streetcomb.read.ReadReport;
 import org.streetcomb.read.RoadFeature;
 import org.streetcomb.read.RoadLayer;
@@ -27,8 +31,8 @@ import org.streetcomb.read.RoadLayer;
 /**
  * The guard against geometry whose noding explodes. Reference: k straight horizontal lines across k straight
  * vertical ones cross exactly k * k times, and noding them gives 2k(k + 1) edges (elementary geometry); the
- * pathological case is two zig-zag lines of 2,000 vertices (a 100 kB file) crossing about a million times,
- * which must be refused in seconds with one line naming the file (hostile corpus, issue 14).
+ * pathological case is two zig-zag lines of 2,000 vertices (a 100 kB file)
+ * crossing about four million times, which must be refused in seconds with one line naming the file (hostile corpus, issue 14).
  */
 class CrossingLimitTest {
 
@@ -63,8 +67,43 @@ class CrossingLimitTest {
         assertEquals(2 * K * (K + 1), new NetworkBuilder(0.5).build(layer(lattice(), 0)).edgeCount(), "0: no limit");
     }
 
+    /**
+     * README's figures: the densest real layer of fixtures/ (open data, NOTICE) crosses mid-segment at most
+     * 0.014 times per segment, and the zig-zag pair about four million times.
+     */
     @Test
-    void twoZigZagLinesAreRefusedInSecondsNamingTheFile() throws IOException {
+    void readmeFiguresOfCrossings() throws IOException {
+        double densest = 0;
+        for (String layer : new String[] {"fixtures/real/roads-seoul.geojson", "fixtures/shapefiles/aurich-dhdn-gk2/roads.shp",
+                "fixtures/shapefiles/mesa-az-stateplane-ft/streets.shp", "fixtures/shapefiles/spearfish-nad27-utm13n/roads.shp"}) {
+            List<SegmentString> lines = segments(LayerReaders.read(Path.of(layer)).features());
+            long segments = lines.stream().mapToLong(l -> l.size() - 1).sum();
+            densest = Math.max(densest, CrossingCount.upTo(lines, Long.MAX_VALUE - 1).crossings() / (double) segments);
+        }
+        String readme = Files.readString(Path.of("README.md")).replaceAll("\\s+", " ");
+        assertTrue(readme.contains(String.format(Locale.ROOT, "cross at most %.3f times per segment", densest)),
+                "README's densest real layer: " + densest);
+        long zigzag = CrossingCount.upTo(segments(LayerReaders.read(zigzag(dir)).features()), Long.MAX_VALUE - 1).crossings();
+        assertTrue(zigzag > 3_900_000 && zigzag < 4_100_000, "about four million: " + zigzag);
+        assertTrue(readme.contains("crossing each other about four million times"));
+    }
+
+    private static List<SegmentString> segments(List<RoadFeature> features) {
+        LocalFrame frame = LocalFrame.covering(features);
+        List<SegmentString> lines = new ArrayList<>();
+        for (RoadFeature f : features) {
+            Coordinate[] c = f.line().getCoordinates();
+            Coordinate[] p = new Coordinate[c.length];
+            for (int i = 0; i < c.length; i++) {
+                p[i] = new Coordinate(frame.x(c[i].x), frame.y(c[i].y));
+            }
+            lines.add(new NodedSegmentString(p, null));
+        }
+        return lines;
+    }
+
+    /** Two zig-zag lines of 2,000 vertices over the same 0.01-degree square, written as GeoJSON (100 kB). */
+    private static Path zigzag(Path dir) throws IOException {
         int n = 2000;
         StringBuilder a = new StringBuilder();
         StringBuilder b = new StringBuilder();
@@ -77,6 +116,12 @@ class CrossingLimitTest {
         Files.writeString(file, "{\"type\":\"FeatureCollection\",\"features\":["
                 + "{\"type\":\"Feature\",\"properties\":{},\"geometry\":{\"type\":\"LineString\",\"coordinates\":[" + a + "]}},"
                 + "{\"type\":\"Feature\",\"properties\":{},\"geometry\":{\"type\":\"LineString\",\"coordinates\":[" + b + "]}}]}");
+        return file;
+    }
+
+    @Test
+    void twoZigZagLinesAreRefusedInSecondsNamingTheFile() throws IOException {
+        Path file = zigzag(dir);
         StringWriter err = new StringWriter();
         int code = assertTimeoutPreemptively(Duration.ofSeconds(20), () -> Main.run(new String[] {"plan", file.toString()},
                 new PrintWriter(new StringWriter(), true), new PrintWriter(err, true)));
