@@ -135,8 +135,20 @@ class ReaderFuzzTest {
         }
         StringWriter out = new StringWriter();
         StringWriter err = new StringWriter();
-        int code = Main.run(args, new ByteArrayInputStream(new byte[0]), new PrintWriter(out, true),
-                new PrintWriter(err, true));
+        // a library that prints on the process's own streams (a parser's "[Fatal Error]" line) is caught too
+        java.io.PrintStream systemErr = System.err;
+        java.io.PrintStream systemOut = System.out;
+        java.io.ByteArrayOutputStream stray = new java.io.ByteArrayOutputStream();
+        int code;
+        try (java.io.PrintStream capture = new java.io.PrintStream(stray, true, StandardCharsets.UTF_8)) {
+            System.setErr(capture);
+            System.setOut(capture);
+            code = Main.run(args, new ByteArrayInputStream(new byte[0]), new PrintWriter(out, true),
+                    new PrintWriter(err, true));
+        } finally {
+            System.setErr(systemErr);
+            System.setOut(systemOut);
+        }
         counts[0]++;
         String problem = null;
         String message = err.toString();
@@ -161,6 +173,9 @@ class ReaderFuzzTest {
         }
         if (problem == null && (JAVA_NAMES.matcher(message).find() || JAVA_NAMES.matcher(out.toString()).find())) {
             problem = "Java names in the output: " + firstLines(message + out);
+        }
+        if (problem == null && stray.size() > 0) {
+            problem = "printed past the command's streams: " + firstLines(stray.toString(StandardCharsets.UTF_8));
         }
         if (problem == null && !before.equals(hashes(folder))) {
             counts[5]++;
