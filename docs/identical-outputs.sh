@@ -1,6 +1,6 @@
 #!/bin/sh
 # Plans and audits the demo town and three real layers with one streetcomb jar and prints a SHA-256 of
-# every output, stage times masked (the summaries and reports carry them; they differ run to run).
+# every output, stage times masked (the --json summaries carry them; they differ run to run; reports no longer do).
 # Run it with the jar before and after a change that should not alter outputs, and compare the lists:
 #
 #   docs/identical-outputs.sh BASE.jar > before.txt; docs/identical-outputs.sh target/streetcomb.jar > after.txt

@@ -139,7 +139,7 @@ final class ReportOptions {
         if (!requested()) {
             return;
         }
-        MapReport report = new MapReport(title, layers, groups, summary, run(), cautions,
+        MapReport report = new MapReport(title, layers, groups, withoutTimes(summary), run(), cautions,
                 basemap == null ? null : new MapReport.Basemap(basemap, basemapCredit), displayTolerance, glance);
         clock.run("report", () -> {
             if (html != null) {
@@ -150,6 +150,23 @@ final class ReportOptions {
                 new QuickLookPng(size[0], size[1]).write(png, report);
             }
         });
+    }
+
+    /**
+     * The summary without its stage times ("seconds", at any depth), so the same inputs and options give the
+     * same report byte for byte; the times stay in the printed summary and in --json.
+     */
+    static JsonNode withoutTimes(JsonNode summary) {
+        JsonNode copy = summary.deepCopy();
+        strip(copy);
+        return copy;
+    }
+
+    private static void strip(JsonNode node) {
+        if (node instanceof com.fasterxml.jackson.databind.node.ObjectNode object) {
+            object.remove("seconds");
+        }
+        node.forEach(ReportOptions::strip);
     }
 
     /** The command line, each input file with its size, and every option's value (given or default). */

@@ -67,6 +67,42 @@ class ReportOptionsTest {
         assertFalse(run.err.contains("\tat "), "no stack trace: " + run.err);
     }
 
+    /**
+     * Reproducible outputs (issue 14): the same inputs and options give the same report and picture byte for
+     * byte, for each command that draws one; stage times stay in the printed summary and --json only.
+     */
+    @Test
+    void theSameRunGivesTheSameReportByteForByte() throws Exception {
+        String[][] commands = {
+            {"plan", DEMO, "--depot=-31.2,44.6", "--max-trip-km", "12", "-q"},
+            {"audit", DEMO, "fixtures/demo/brackenford-drive.gpx", "--depot=-31.2,44.6", "--mop-up",
+                folder.resolve("mop-up.geojson").toString(), "-q"},
+            {"health", DEMO, "-q"}};
+        for (String[] command : commands) {
+            byte[][] first = null;
+            for (int run = 0; run < 2; run++) {
+                Path html = folder.resolve(command[0] + ".html");
+                Path png = folder.resolve(command[0] + ".png");
+                String[] args = java.util.stream.Stream.concat(java.util.Arrays.stream(command),
+                        java.util.stream.Stream.of("--report", html.toString(), "--quicklook", png.toString()))
+                        .toArray(String[]::new);
+                Run r = run(args);
+                assertTrue(r.code == ExitCode.OK || r.code == ExitCode.NO_TOUR, r.err);
+                byte[][] written = {Files.readAllBytes(html), Files.readAllBytes(png)};
+                if (first == null) {
+                    first = written;
+                    Files.delete(html);
+                    Files.delete(png);
+                } else {
+                    org.junit.jupiter.api.Assertions.assertArrayEquals(first[0], written[0], command[0] + " report");
+                    org.junit.jupiter.api.Assertions.assertArrayEquals(first[1], written[1], command[0] + " picture");
+                    assertFalse(new String(written[0], java.nio.charset.StandardCharsets.UTF_8).contains("seconds."),
+                            "no stage times in the report");
+                }
+            }
+        }
+    }
+
     private static Run run(String... args) {
         StringWriter out = new StringWriter();
         StringWriter err = new StringWriter();
