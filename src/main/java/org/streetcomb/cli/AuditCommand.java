@@ -189,7 +189,7 @@ public final class AuditCommand implements Callable<Integer> {
                     "--start cannot be combined with the trip options: every trip starts and ends at the depot");
         }
         MatchSettings settings = new MatchSettings(sigma, radius, beta, maxGap, maxSpeed / 3.6, doubtOdds, driftWindow);
-        StageClock clock = new StageClock(TerminalProgress.forCommandLine(quiet, System.err));
+        StageClock clock = new StageClock(TerminalProgress.forCommandLine(quiet, spec.commandLine().getErr()));
         TrackLines seen = new TrackLines();
         PlanScope asked = scope();
         if (plan != null) {

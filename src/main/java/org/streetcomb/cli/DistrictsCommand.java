@@ -79,9 +79,14 @@ public final class DistrictsCommand implements Callable<Integer> {
             throw new CommandLine.ParameterException(spec.commandLine(), "--threads must be 1 or more");
         }
         long start = System.nanoTime();
+        // progress names areas from the user's data: it goes through the command's terminal-safe stream
+        PrintWriter err = spec.commandLine().getErr();
         List<DistrictBatch.Row> rows = DistrictBatch.run(new DistrictBatch.Request(roads, layer.readOptions(), areas,
                 PlaceLayerReader.read(areas, areaCrs, areaTable), depotField, margin, leaveOutCutOff, out, cores),
-                quiet ? line -> { } : System.err::println);
+                quiet ? line -> { } : line -> {
+                    err.println(line);
+                    err.flush();
+                });
         PrintWriter stdout = spec.commandLine().getOut();
         long failed = rows.stream().filter(r -> !r.status().equals("planned")).count();
         double service = rows.stream().mapToDouble(DistrictBatch.Row::serviceKm).sum();

@@ -81,7 +81,7 @@ public final class HealthCommand implements Callable<Integer> {
         depot.check(spec.commandLine());
         map.validate();
         CheckOptions options = new CheckOptions(snap, nearMiss, stub, duplicate);
-        StageClock clock = new StageClock(TerminalProgress.forCommandLine(quiet, System.err));
+        StageClock clock = new StageClock(TerminalProgress.forCommandLine(quiet, spec.commandLine().getErr()));
         HealthReport report = HealthCheck.run(new HealthCheck.Request(input, layer.readOptions(), options,
                 depot.position, depot.reach), clock);
         List<Finding> findings = report.findings();

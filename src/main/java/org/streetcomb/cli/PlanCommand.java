@@ -78,7 +78,7 @@ public final class PlanCommand implements Callable<Integer> {
         field.check(spec.commandLine());
         report.validate();
         PrintWriter stdout = spec.commandLine().getOut();
-        StageClock clock = new StageClock(TerminalProgress.forCommandLine(quiet, System.err));
+        StageClock clock = new StageClock(TerminalProgress.forCommandLine(quiet, spec.commandLine().getErr()));
         Plan plan = Planner.plan(new PlanRequest(input, depot.position, snap, depot.reach, service.scope.depotOnly, layer.readOptions(),
                 service.options(spec.commandLine()).withArea(area.area(spec.commandLine())), field.arrangement()),
                 repair.options(), clock);

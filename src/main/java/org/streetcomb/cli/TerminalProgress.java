@@ -1,6 +1,6 @@
 package org.streetcomb.cli;
 
-import java.io.PrintStream;
+import java.io.PrintWriter;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.Locale;
@@ -17,7 +17,7 @@ import org.streetcomb.timing.StageClock;
  */
 final class TerminalProgress implements StageClock.Listener {
 
-    private final PrintStream err;
+    private final PrintWriter err;
     private final ScheduledExecutorService timer = Executors.newSingleThreadScheduledExecutor(r -> {
         Thread thread = new Thread(r, "progress");
         thread.setDaemon(true);
@@ -26,12 +26,15 @@ final class TerminalProgress implements StageClock.Listener {
     private ScheduledFuture<?> pending;
     private final AtomicBoolean shown = new AtomicBoolean();
 
-    private TerminalProgress(PrintStream err) {
+    private TerminalProgress(PrintWriter err) {
         this.err = err;
     }
 
-    /** A listener for the command line: silent when asked to be, or when stderr is not a terminal. */
-    static StageClock.Listener forCommandLine(boolean quiet, PrintStream err) {
+    /**
+     * A listener for the command line: silent when asked to be, or when stderr is not a terminal. It writes
+     * through the command's own error stream, which shows control characters in data as text.
+     */
+    static StageClock.Listener forCommandLine(boolean quiet, PrintWriter err) {
         return quiet || !stderrIsTerminal() ? StageClock.SILENT : new TerminalProgress(err);
     }
 
@@ -50,6 +53,7 @@ final class TerminalProgress implements StageClock.Listener {
         pending.cancel(false);
         if (shown.get()) {
             err.printf(Locale.ROOT, " %.1f s%n", stage.seconds());
+            err.flush();
         }
     }
 
@@ -59,6 +63,7 @@ final class TerminalProgress implements StageClock.Listener {
             err.println();
         }
         err.println(message);
+        err.flush();
     }
 
     /** On Linux, whether file descriptor 2 is a terminal; elsewhere, whether the JVM has a console. */

@@ -80,4 +80,17 @@ class HostileTextTest {
         }
         assertTrue((result[1] + result[2]).contains("\\x1B"), result[1] + result[2]);
     }
+
+    /** The districts batch names each area in its progress lines: escape sequences there are shown as text. */
+    @Test
+    void districtProgressPrintsNoEscapeSequence() throws Exception {
+        String areas = Files.readString(Path.of("fixtures/areas/baltimore-districts.geojson"))
+                .replace("\"Ash District\"", "\"Ash District\\u001b]0;owned\\u0007\"");
+        Path hostile = dir.resolve("areas.geojson");
+        Files.writeString(hostile, areas);
+        String[] result = run("districts", "fixtures/osm/baltimore.osm.pbf", hostile.toString(), "-o",
+                dir.resolve("out").toString(), "--threads", "1");
+        assertFalse(result[2].contains("\u001b") || result[2].contains("\u0007"), result[2]);
+        assertTrue(result[2].contains("Ash District\\x1B]0;owned\\x07"), result[2]);
+    }
 }
