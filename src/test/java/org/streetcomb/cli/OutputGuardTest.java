@@ -10,16 +10,14 @@ import java.io.PrintWriter;
 import java.io.StringWriter;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.security.MessageDigest;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
-import java.util.TreeMap;
-import java.util.stream.Stream;
 import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.streetcomb.ExitCode;
+import org.streetcomb.FolderHashes;
 
 /**
  * Outputs never touch inputs: a command line whose output names an input (or a file that comes with one, such
@@ -48,7 +46,7 @@ class OutputGuardTest {
 
     /** Runs the command and checks the refusal: exit 2, one line holding every expected part, nothing changed. */
     private void assertClash(List<String> args, String... expected) throws IOException {
-        Map<Path, String> before = hashes();
+        Map<String, String> before = hashes();
         StringWriter err = new StringWriter();
         int code = Main.run(args.toArray(new String[0]), new PrintWriter(new StringWriter()), new PrintWriter(err, true));
         String message = err.toString();
@@ -60,25 +58,8 @@ class OutputGuardTest {
         assertEquals(before, hashes(), "a file in the folder was written, changed or removed");
     }
 
-    private Map<Path, String> hashes() throws IOException {
-        Map<Path, String> hashes = new TreeMap<>();
-        try (Stream<Path> files = Files.walk(dir)) {
-            for (Path file : (Iterable<Path>) files::iterator) {
-                if (Files.isSymbolicLink(file)) {
-                    hashes.put(file, "link to " + Files.readSymbolicLink(file));
-                } else if (Files.isRegularFile(file)) {
-                    try {
-                        byte[] digest = MessageDigest.getInstance("SHA-256").digest(Files.readAllBytes(file));
-                        hashes.put(file, java.util.HexFormat.of().formatHex(digest));
-                    } catch (java.security.NoSuchAlgorithmException e) {
-                        throw new AssertionError(e);
-                    }
-                } else if (!Files.isDirectory(file)) {
-                    hashes.put(file, "special");
-                }
-            }
-        }
-        return hashes;
+    private Map<String, String> hashes() {
+        return FolderHashes.of(dir);
     }
 
     private String at(String name) {
@@ -178,7 +159,7 @@ class OutputGuardTest {
     @Test
     void missingReportFolderLeavesNoOtherOutput() throws IOException {
         // the GeoJSON, GPX, KML and CSV were once written before the missing folder was found
-        Map<Path, String> before = hashes();
+        Map<String, String> before = hashes();
         StringWriter err = new StringWriter();
         int code = Main.run(new String[] {"plan", roads.toString(), "--out=" + at("t.geojson"), "--gpx=" + at("t.gpx"),
             "--kml=" + at("t.kml"), "--directions=" + at("t.csv"), "--report=" + at("missing/r.html")},

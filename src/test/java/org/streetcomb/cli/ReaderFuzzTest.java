@@ -10,10 +10,7 @@ import java.io.StringWriter;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.security.MessageDigest;
-import java.security.NoSuchAlgorithmException;
 import java.util.ArrayList;
-import java.util.HexFormat;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
@@ -25,6 +22,7 @@ import org.junit.jupiter.api.AfterAll;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.streetcomb.ExitCode;
+import org.streetcomb.FolderHashes;
 
 /**
  * Seeded mutation fuzzing of every reader through the command line (a mutation loop of our own, in the
@@ -202,22 +200,8 @@ class ReaderFuzzTest {
         return text.lines().limit(4).reduce((a, b) -> a + " | " + b).orElse("(nothing)");
     }
 
-    private static Map<String, String> hashes(Path folder) throws IOException {
-        Map<String, String> hashes = new TreeMap<>();
-        try (Stream<Path> files = Files.list(folder)) {
-            for (Path f : files.toList()) {
-                hashes.put(f.getFileName().toString(), sha256(Files.readAllBytes(f)));
-            }
-        }
-        return hashes;
-    }
-
-    private static String sha256(byte[] bytes) {
-        try {
-            return HexFormat.of().formatHex(MessageDigest.getInstance("SHA-256").digest(bytes));
-        } catch (NoSuchAlgorithmException e) {
-            throw new IllegalStateException(e);
-        }
+    private static Map<String, String> hashes(Path folder) {
+        return FolderHashes.of(folder);
     }
 
     private static void deleteFolder(Path folder) throws IOException {

@@ -20,11 +20,12 @@ final class Refusals {
     }
 
     /**
-     * Asserts exit code 3, one line on stderr containing {@code expected}, no stack trace, and no output
-     * file written in {@code dir}.
+     * Asserts exit code 3, one line on stderr containing {@code expected}, no stack trace, and nothing in
+     * {@code dir} written, changed or removed (the inputs hashed before and after).
      */
     static void assertRefused(Path dir, Path layer, String expected, String... options) {
         Path out = dir.resolve("tour.geojson");
+        java.util.Map<String, String> before = org.streetcomb.FolderHashes.of(dir);
         StringWriter err = new StringWriter();
         List<String> args = new ArrayList<>(List.of("plan", layer.toString(), "--out=" + out));
         args.addAll(List.of(options));
@@ -35,5 +36,6 @@ final class Refusals {
         assertTrue(message.contains(expected), () -> "expected '" + expected + "' in: " + message);
         assertFalse(message.contains("Exception"), message);
         assertFalse(Files.exists(out));
+        assertEquals(before, org.streetcomb.FolderHashes.of(dir), "the folder of the input changed");
     }
 }
