@@ -24,6 +24,26 @@ class GeoPackageReaderTest {
     @TempDir
     Path dir;
 
+    /**
+     * A GeoPackage in write-ahead-log mode (SQLite's WAL journal, which GIS programs often leave set) is read
+     * without leaving -wal and -shm files beside it or changing it (hostile corpus, issue 14).
+     */
+    @Test
+    void aGeoPackageInWalModeIsLeftAsItWas() throws Exception {
+        Path gpkg = dir.resolve("wal.gpkg");
+        Files.copy(Path.of("fixtures/geopackage/mesa.gpkg"), gpkg);
+        try (java.sql.Connection c = java.sql.DriverManager.getConnection("jdbc:sqlite:" + gpkg);
+             java.sql.Statement s = c.createStatement()) {
+            s.execute("PRAGMA journal_mode=WAL");
+        }
+        java.util.Map<String, String> before = org.streetcomb.FolderHashes.of(dir);
+        assertEquals(java.util.Set.of("wal.gpkg"), before.keySet(), "WAL set and the connection closed cleanly");
+        // SQLite file format: bytes 18 and 19 of the header are 2 for WAL (sqlite.org/fileformat2.html)
+        assertEquals(2, Files.readAllBytes(gpkg)[18], "the copy is in WAL mode");
+        assertEquals(293, LayerReaders.read(gpkg).features().size());
+        assertEquals(before, org.streetcomb.FolderHashes.of(dir), "no -wal or -shm left, the file unchanged");
+    }
+
     @Test
     void matchesGdalAndTheShapefile() {
         RoadLayer layer = LayerReaders.read(MESA);
