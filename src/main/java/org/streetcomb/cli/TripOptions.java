@@ -71,6 +71,12 @@ public final class TripOptions {
             description = "Average speed on deadhead, for trip durations (default: ${DEFAULT-VALUE} km/h).")
     double travelSpeed;
 
+    @Option(names = "--turn-back-metres", paramLabel = "METRES", defaultValue = "0",
+            description = "What a U-turn where the street goes on costs when trips are driven between their services, "
+                    + "in metres of driving: a detour round a block up to that long is taken instead (a lorry crew "
+                    + "might give 400); 0, the default, drives the shortest way. Turning back at a dead end costs nothing.")
+    double turnBackMetres;
+
     @Option(names = "--trip-restarts", paramLabel = "N",
             description = "Search effort when cutting trips: each unit breeds 25 more candidate solutions; more can "
                     + "find shorter trips, 0 only improves the tour's own order (default: " + TripPlanner.DEFAULT_RESTARTS
@@ -109,6 +115,9 @@ public final class TripOptions {
         if (!(serviceSpeed > 0) || !(travelSpeed > 0)) {
             throw new CommandLine.ParameterException(commandLine, "speeds must be above 0 km/h");
         }
+        if (!(turnBackMetres >= 0 && turnBackMetres < Double.POSITIVE_INFINITY)) {
+            throw new CommandLine.ParameterException(commandLine, "--turn-back-metres must be 0 or more");
+        }
         if (restarts != null && restarts < 0) {
             throw new CommandLine.ParameterException(commandLine, "--trip-restarts must be 0 or more");
         }
@@ -117,7 +126,7 @@ public final class TripOptions {
     /** The fleet and trip limits asked for. */
     FleetRequest request() {
         return new FleetRequest(maxKm, maxHours, vehicles, shiftHours, capacity, demandField, demandPerKm, lanesField,
-                reloadAt, serviceSpeed, travelSpeed, restarts);
+                reloadAt, serviceSpeed, travelSpeed, restarts, turnBackMetres);
     }
 
     private static int services(Trip trip) {

@@ -38,7 +38,8 @@ public final class FleetPlanner {
         this.network = network;
         this.depot = depot;
         this.settings = settings;
-        TripPlanner.Settings cut = new TripPlanner.Settings(settings.tripLimit(), 0, settings.restarts(), settings.seed());
+        TripPlanner.Settings cut = new TripPlanner.Settings(settings.tripLimit(), 0, settings.restarts(), settings.seed(),
+                settings.turnBackMetres());
         this.trips = new TripPlanner(network, depot, cut);
         this.viaReloads = settings.reloads().isEmpty() ? null : new TripPlanner(network, depot, cut,
                 settings.reloads().stream().mapToInt(Integer::intValue).toArray());

@@ -17,7 +17,12 @@ import org.streetcomb.trip.TripLimit;
  * @param reloads    network nodes besides the depot where a vehicle may reload between trips (a salt barn, a tip)
  */
 public record FleetSettings(int vehicles, TripLimit tripLimit, double shiftHours, double serviceKmh, double travelKmh,
-                            int restarts, long seed, List<Integer> reloads) {
+                            int restarts, long seed, List<Integer> reloads, double turnBackMetres) {
+
+    public FleetSettings(int vehicles, TripLimit tripLimit, double shiftHours, double serviceKmh, double travelKmh,
+                         int restarts, long seed, List<Integer> reloads) {
+        this(vehicles, tripLimit, shiftHours, serviceKmh, travelKmh, restarts, seed, reloads, 0);
+    }
 
     public FleetSettings {
         if (vehicles < 1) {

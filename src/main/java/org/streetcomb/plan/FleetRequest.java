@@ -23,7 +23,14 @@ import org.streetcomb.trip.TripPlanner;
  */
 public record FleetRequest(Double maxKm, Double maxHours, Integer vehicles, Double shiftHours, Double capacity,
                            String demandField, Double demandPerKm, String lanesField, List<LonLat> reloadAt,
-                           double serviceKmh, double travelKmh, Integer restarts) {
+                           double serviceKmh, double travelKmh, Integer restarts, double turnBackMetres) {
+
+    public FleetRequest(Double maxKm, Double maxHours, Integer vehicles, Double shiftHours, Double capacity,
+                        String demandField, Double demandPerKm, String lanesField, List<LonLat> reloadAt,
+                        double serviceKmh, double travelKmh, Integer restarts) {
+        this(maxKm, maxHours, vehicles, shiftHours, capacity, demandField, demandPerKm, lanesField, reloadAt, serviceKmh,
+                travelKmh, restarts, 0);
+    }
 
     /** Average speeds, km/h, when none are given: a slow servicing pass and town traffic (common practice, from memory). */
     public static final int DEFAULT_SERVICE_KMH = 10;

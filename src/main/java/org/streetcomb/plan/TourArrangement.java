@@ -85,7 +85,7 @@ final class TourArrangement {
         }
         FleetSettings settings = new FleetSettings(request.vehicles() == null ? 1 : request.vehicles(),
                 request.limit(), request.shiftHours() == null ? Double.POSITIVE_INFINITY : request.shiftHours(),
-                request.serviceKmh(), request.travelKmh(), request.restartsOrAuto(), 1, reloads);
+                request.serviceKmh(), request.travelKmh(), request.restartsOrAuto(), 1, reloads, request.turnBackMetres());
         FleetPlanner planner = new FleetPlanner(plan.network(), plan.depot(), settings);
         if (request.restarts() != null && request.restarts() > 0) {
             planner.withProgress(clock::note);

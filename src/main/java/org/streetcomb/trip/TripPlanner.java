@@ -9,13 +9,16 @@ import java.util.function.Consumer;
 import java.util.function.IntPredicate;
 import java.util.function.Supplier;
 import java.util.stream.IntStream;
-import org.streetcomb.network.DijkstraSearch;
-import org.streetcomb.network.Heading;
 import org.streetcomb.network.StreetNetwork;
+import org.streetcomb.network.TurnCostPath;
 import org.streetcomb.solve.ServiceDemand;
 import org.streetcomb.tour.EarliestService;
+import org.streetcomb.tour.EdgeBearings;
 import org.streetcomb.tour.Tour;
 import org.streetcomb.tour.TourValidator;
+import org.streetcomb.tour.TrafficSide;
+import org.streetcomb.tour.Turn;
+import org.streetcomb.tour.TurnKind;
 
 /**
  * Cuts a tour into trips that each start and end at the depot, fit a limit (length, duration or
@@ -42,7 +45,11 @@ public final class TripPlanner {
      *                 {@link #DEFAULT_RESTARTS} up to {@link #LARGE_TASKS} tasks and 0 beyond
      * @param seed     seed of the randomised giant tours
      */
-    public record Settings(TripLimit limit, int vehicles, int restarts, long seed) {
+    public record Settings(TripLimit limit, int vehicles, int restarts, long seed, double turnBackMetres) {
+
+        public Settings(TripLimit limit, int vehicles, int restarts, long seed) {
+            this(limit, vehicles, restarts, seed, 0);
+        }
     }
 
     /**
@@ -302,7 +309,11 @@ public final class TripPlanner {
      * while that shortens it.
      */
     private List<Trip> trips(Tasks tasks, List<int[]> refs, Distances distances) {
-        DijkstraSearch search = new DijkstraSearch(network, Heading.OUTBOUND);
+        EdgeBearings bearings = EdgeBearings.of(network);
+        TurnCostPath turning = new TurnCostPath(network, (in, node, out) -> network.degree(node) > 1
+                && Turn.between(bearings, TrafficSide.RIGHT, in >> 1, (in & 1) == 0, out >> 1, (out & 1) == 0).kind()
+                == TurnKind.U_TURN ? settings.turnBackMetres() : 0);
+        TurnCostPath shortest = new TurnCostPath(network, (in, node, out) -> 0);
         List<Trip> trips = new ArrayList<>();
         for (int[] trip : refs) {
             int[][] services = new int[trip.length][];
@@ -322,23 +333,33 @@ public final class TripPlanner {
                 from = home.nearestFrom(services[0][1]);
                 to = home.nearestTo(services[services.length - 1][2]);
             }
-            Tour tour = EarliestService.of(drive(search, services, from, to));
-            while (true) {
-                Tour again = EarliestService.of(drive(search, servicesOf(tour), from, to));
-                if (again.length(network) >= tour.length(network) - 1e-9) {
-                    break;
-                }
-                tour = again;
+            Tour tour = driven(turning, services, from, to);
+            double length = tour.length(network);
+            if (!settings.limit().allows(service, length - service, demand)) {
+                // the detours that spare U-turns must not break the trip's limit: then drive it shortest
+                tour = driven(shortest, services, from, to);
+                length = tour.length(network);
             }
             List<String> problems = TourValidator.problems(network, tour, ServiceDemand.everyEdge(network), mustCover, to);
             if (!problems.isEmpty()) {
                 throw new IllegalStateException("invalid trip: " + problems);
             }
-            double length = tour.length(network);
             boolean over = !settings.limit().allows(service, length - service, demand);
             trips.add(new Trip(tour, length, service, demand, over));
         }
         return trips;
+    }
+
+    /** The trip driven through its services, again in the order first serviced while that shortens it. */
+    private Tour driven(TurnCostPath paths, int[][] services, int from, int to) {
+        Tour tour = EarliestService.of(drive(paths, services, from, to));
+        while (true) {
+            Tour again = EarliestService.of(drive(paths, servicesOf(tour), from, to));
+            if (again.length(network) >= tour.length(network) - 1e-9) {
+                return tour;
+            }
+            tour = again;
+        }
     }
 
     /**
@@ -347,8 +368,7 @@ public final class TripPlanner {
      */
     public Trip redriven(Trip trip, int from, int to) {
         int[][] services = servicesOf(trip.tour());
-        DijkstraSearch search = new DijkstraSearch(network, Heading.OUTBOUND);
-        Tour tour = drive(search, services, from, to);
+        Tour tour = drive(new TurnCostPath(network, (in, node, out) -> 0), services, from, to);
         int[] mustCover = new int[services.length];
         for (int k = 0; k < services.length; k++) {
             mustCover[k] = services[k][0];
@@ -373,33 +393,34 @@ public final class TripPlanner {
         return services.toArray(int[][]::new);
     }
 
-    /** A walk from {@code from} through the services in order, by shortest paths, to {@code to}. */
-    private Tour drive(DijkstraSearch search, int[][] services, int from, int to) {
+    /**
+     * A walk from {@code from} through the services in order to {@code to}, each connection the cheapest drive
+     * that {@code paths} finds, turning back included: arriving at a service by the street it services, or
+     * leaving the end of one by that street, is a U-turn too.
+     */
+    private Tour drive(TurnCostPath paths, int[][] services, int from, int to) {
         List<int[]> steps = new ArrayList<>();
         int at = from;
+        int arrivedBy = -1;
         for (int[] s : services) {
-            at = connect(search, at, s[1], steps);
-            steps.add(new int[] {s[0], network.from(s[0]) == s[1] ? 1 : 0, 1});
+            int serviceArc = TurnCostPath.arcFrom(network, s[0], s[1]);
+            connect(paths, arrivedBy, at, s[1], serviceArc, steps);
+            steps.add(new int[] {s[0], (serviceArc & 1) == 0 ? 1 : 0, 1});
             at = s[2];
+            arrivedBy = serviceArc;
         }
-        connect(search, at, to, steps);
+        connect(paths, arrivedBy, at, to, -1, steps);
         return toTour(steps, from);
     }
 
-    private int connect(DijkstraSearch search, int from, int to, List<int[]> steps) {
-        if (from == to) {
-            return to;
-        }
-        search.start(from);
-        if (search.runTo(to) == Double.POSITIVE_INFINITY) {
+    private void connect(TurnCostPath paths, int arrivedBy, int from, int to, int leaveBy, List<int[]> steps) {
+        int[] arcs = paths.arcs(arrivedBy, from, to, leaveBy);
+        if (arcs == null) {
             throw new IllegalStateException("no path from node " + from + " to node " + to);
         }
-        int at = from;
-        for (int e : search.pathTo(to)) {
-            steps.add(new int[] {e, network.from(e) == at ? 1 : 0, 0});
-            at = network.other(e, at);
+        for (int arc : arcs) {
+            steps.add(new int[] {arc >> 1, (arc & 1) == 0 ? 1 : 0, 0});
         }
-        return to;
     }
 
     private Tour toTour(List<int[]> steps, int start) {

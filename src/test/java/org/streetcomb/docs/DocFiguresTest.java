@@ -104,6 +104,18 @@ class DocFiguresTest {
                 one / 1000);
     }
 
+    /** README's figures for --turn-back-metres on the demo town's 1.5-hour trips. */
+    @Test
+    void turnBackPrice() {
+        JsonNode plain = json("plan", DEMO, "--depot=-31.2,44.6", "--max-trip-hours", "1.5", "--json");
+        JsonNode priced = json("plan", DEMO, "--depot=-31.2,44.6", "--max-trip-hours", "1.5", "--turn-back-metres", "400",
+                "--json");
+        Page.of("README.md").says(String.format(Locale.ROOT, "400 takes the U-turns outside dead ends from %d to %d for "
+                        + "%.1f %% more driving", plain.at("/field/turns/u_turns_outside_dead_ends").asInt(),
+                priced.at("/field/turns/u_turns_outside_dead_ends").asInt(),
+                100 * (priced.at("/totals/tour_m").asDouble() / plain.at("/totals/tour_m").asDouble() - 1)));
+    }
+
     /** The figures of the capacitated benchmark sets: README's rounded means from the table in docs/quality.md. */
     @Test
     void tripBenchmarkMeans() {

@@ -44,6 +44,33 @@ class TripPlannerTest {
         assertTrue(result.length() >= plan.tourLength() - 1e-6, "trips cannot beat the optimal single tour");
     }
 
+    /**
+     * A price on turning back in the street (--turn-back-metres) makes the trips take fewer U-turns where a
+     * street goes on, at some length, and every trip stays valid and within its limit; turning back at a
+     * dead end stays free (TurnCounts' definition).
+     */
+    @Test
+    void pricingUTurnsTakesFewerOfThemWithinTheLimit() {
+        double limit = 12_000;
+        org.streetcomb.tour.EdgeBearings bearings = org.streetcomb.tour.EdgeBearings.of(network);
+        int[] outside = new int[2];
+        double[] length = new double[2];
+        double[] metres = {0, 400};
+        for (int k = 0; k < 2; k++) {
+            TripPlanner.Result result = new TripPlanner(network, plan.depot(),
+                    new TripPlanner.Settings(TripLimit.length(limit), 0, 2, 7, metres[k])).plan(plan.tours().get(0), null);
+            checkTrips(result.trips());
+            for (Trip trip : result.trips()) {
+                assertFalse(trip.overLimit());
+                outside[k] += org.streetcomb.tour.TurnCounts.of(network, bearings, org.streetcomb.tour.TrafficSide.RIGHT,
+                        trip.tour()).uTurnsOutsideDeadEnds();
+            }
+            length[k] = result.length();
+        }
+        assertTrue(outside[1] < outside[0], "U-turns outside dead ends " + outside[0] + " -> " + outside[1]);
+        assertTrue(length[1] >= length[0] - 1e-6, "the detours cost length");
+    }
+
     @Test
     void vehiclesShareTheWorkAndTheLongestTripRespectsTheBounds() {
         int k = 3;
