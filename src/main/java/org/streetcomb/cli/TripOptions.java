@@ -4,6 +4,7 @@ import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.math.BigDecimal;
 import java.math.RoundingMode;
+import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
@@ -15,6 +16,7 @@ import org.streetcomb.fleet.ServiceOverlap;
 import org.streetcomb.network.LonLat;
 import org.streetcomb.network.StreetNetwork;
 import org.streetcomb.fleet.VehicleDay;
+import org.streetcomb.read.PlaceLayerReader;
 import picocli.CommandLine;
 import picocli.CommandLine.Option;
 
@@ -62,6 +64,11 @@ public final class TripOptions {
             description = "A place besides the depot where vehicles may reload between trips (a salt barn, a tip), "
                     + "as longitude,latitude; repeat for several. Each trip ends where the way on is shortest.")
     List<LonLat> reloadAt = new ArrayList<>();
+
+    @Option(names = "--reload-points", paramLabel = "FILE",
+            description = "A layer of points where vehicles may reload (GeoJSON, a shapefile or a GeoPackage, in any "
+                    + "CRS the readers take), used as --reload-at uses its places, after them.")
+    Path reloadPoints;
 
     @Option(names = "--service-speed", paramLabel = "KMH", defaultValue = "" + FleetRequest.DEFAULT_SERVICE_KMH,
             description = "Average speed while servicing, for trip durations (default: ${DEFAULT-VALUE} km/h).")
@@ -125,8 +132,12 @@ public final class TripOptions {
 
     /** The fleet and trip limits asked for. */
     FleetRequest request() {
+        List<LonLat> reloads = new ArrayList<>(reloadAt);
+        if (reloadPoints != null) {
+            PlaceLayerReader.points(reloadPoints, "--reload-points").forEach(p -> reloads.add(new LonLat(p[0], p[1])));
+        }
         return new FleetRequest(maxKm, maxHours, vehicles, shiftHours, capacity, demandField, demandPerKm, lanesField,
-                reloadAt, serviceSpeed, travelSpeed, restarts, turnBackMetres);
+                reloads, serviceSpeed, travelSpeed, restarts, turnBackMetres);
     }
 
     private static int services(Trip trip) {
@@ -181,7 +192,7 @@ public final class TripOptions {
                 lines.add(new String[] {several ? "    trip " + (i + 1) : "  trip " + (t + 1), String.format(Locale.ROOT,
                         "%.3f km, %.2f h, deadhead %.1f %%%s%s%s", trip.length() / 1000, hours, 100 * trip.deadheadShare(),
                         capacity != null ? String.format(Locale.ROOT, ", load %.2f of %.2f", trip.demand(), capacity) : "",
-                        end != depot && reload >= 0 ? ", then reloads at the place of --reload-at no. " + (reload + 1) : "",
+                        end != depot && reload >= 0 ? ", then reloads at reload place " + (reload + 1) : "",
                         trip.overLimit() ? " [over the limit]" : "")});
                 if (trip.overLimit() && services(trip) == 1) {
                     lines.add(new String[] {"Warning", (several ? "vehicle " + day.vehicle() + " trip " + (i + 1) : "trip " + (t + 1))

@@ -77,7 +77,7 @@ final class TourArrangement {
             NearestNode.Hit hit = NearestNode.of(plan.network(), at.lon(), at.lat(),
                     node -> plan.components().of(node) == part);
             if (hit.node() < 0 || hit.distance() > FleetRequest.RELOAD_REACH_METRES) {
-                throw new InputError(String.format(Locale.ROOT, "--reload-at %s,%s: no street node of the depot's part "
+                throw new InputError(String.format(Locale.ROOT, "reload place %s,%s (--reload-at or --reload-points): no street node of the depot's part "
                         + "within %.0f m; give a place on the network", at.lon(), at.lat(),
                         FleetRequest.RELOAD_REACH_METRES));
             }

@@ -50,6 +50,24 @@ public final class PlaceLayerReader {
     }
 
     /**
+     * The points of a point layer (reload places, depots) as longitude/latitude pairs, in the layer's order;
+     * a feature that is not a single point is refused with its id, so a user finds it in their GIS.
+     *
+     * @param option the option that named the layer, for messages
+     */
+    public static List<double[]> points(Path file, String option) {
+        List<double[]> points = new ArrayList<>();
+        for (Place place : read(file, null, null)) {
+            if (!(place.geometry() instanceof org.locationtech.jts.geom.Point point) || point.isEmpty()) {
+                throw InputError.at(file, "feature " + place.id(), (place.geometry() == null ? "no geometry"
+                        : "a " + place.geometry().getGeometryType()) + ": " + option + " takes a layer of points");
+            }
+            points.add(new double[] {point.getX(), point.getY()});
+        }
+        return points;
+    }
+
+    /**
      * @param crs   "EPSG:code" or a WKT file for a layer that states none (or states it wrongly), or null
      * @param table the table of a GeoPackage holding several feature tables, or null
      */
