@@ -52,7 +52,12 @@ public final class DistrictBatch {
 
     /** What to plan: every area of {@code areas}, each with its depot, on the roads of {@code roads}. */
     public record Request(Path roads, ReadOptions read, Path areasFile, List<Place> areas, String depotField,
-                          double margin, boolean leaveOutCutOff, Path out, int threads) {
+                          double margin, boolean leaveOutCutOff, Path out, int threads, List<double[]> depots) {
+
+        public Request(Path roads, ReadOptions read, Path areasFile, List<Place> areas, String depotField,
+                       double margin, boolean leaveOutCutOff, Path out, int threads) {
+            this(roads, read, areasFile, areas, depotField, margin, leaveOutCutOff, out, threads, null);
+        }
     }
 
     /** One row of the summary. */
@@ -130,8 +135,19 @@ public final class DistrictBatch {
         }
     }
 
-    /** The depot from the area's depot attribute ("lon,lat"), checked to lie in the area; null for the default. */
+    /**
+     * The depot: the first point of the depot layer that lies in the area, or the area's depot attribute
+     * ("lon,lat"), checked to lie in the area; null for the default.
+     */
     private static LonLat depot(Request request, Place place, Geometry polygon) {
+        if (request.depots() != null) {
+            for (double[] point : request.depots()) {
+                if (polygon.covers(polygon.getFactory().createPoint(new org.locationtech.jts.geom.Coordinate(point[0], point[1])))) {
+                    return new LonLat(point[0], point[1]);
+                }
+            }
+            throw InputError.at(request.areasFile(), "feature " + place.id(), "no point of the depot layer lies in the area");
+        }
         if (request.depotField() == null) {
             return null;
         }

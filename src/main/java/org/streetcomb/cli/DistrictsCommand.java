@@ -42,6 +42,11 @@ public final class DistrictsCommand implements Callable<Integer> {
                     + "Default: a node of the main network nearest the middle of the area.")
     String depotField;
 
+    @Option(names = "--depots", paramLabel = "FILE",
+            description = "A point layer of depots (GeoJSON, a shapefile or a GeoPackage): each area's depot is the "
+                    + "first point that lies in it; an area with none fails with a line of its own.")
+    Path depots;
+
     @Option(names = "--area-margin", paramLabel = "METRES", defaultValue = "1000",
             description = "How far outside each area roads are kept to travel on (default: ${DEFAULT-VALUE} m).")
     double margin;
@@ -78,11 +83,15 @@ public final class DistrictsCommand implements Callable<Integer> {
         if (cores < 1) {
             throw new CommandLine.ParameterException(spec.commandLine(), "--threads must be 1 or more");
         }
+        if (depots != null && depotField != null) {
+            throw new CommandLine.ParameterException(spec.commandLine(), "give --depots or --depot-field, not both");
+        }
         long start = System.nanoTime();
         // progress names areas from the user's data: it goes through the command's terminal-safe stream
         PrintWriter err = spec.commandLine().getErr();
         List<DistrictBatch.Row> rows = DistrictBatch.run(new DistrictBatch.Request(roads, layer.readOptions(), areas,
-                PlaceLayerReader.read(areas, areaCrs, areaTable), depotField, margin, leaveOutCutOff, out, cores),
+                PlaceLayerReader.read(areas, areaCrs, areaTable), depotField, margin, leaveOutCutOff, out, cores,
+                depots == null ? null : PlaceLayerReader.points(depots, "--depots")),
                 quiet ? line -> { } : line -> {
                     err.println(line);
                     err.flush();

@@ -37,6 +37,31 @@ class DistrictBatchTest {
                 PlaceLayerReader.read(areas, null, null), depotField, 1000, true, out, threads), line -> { });
     }
 
+    /**
+     * Depots from a point layer: the area holding a point is planned from it, exactly as when the same point
+     * is its depot attribute; an area holding none gets a line of its own and the others go on.
+     */
+    @Test
+    void depotsFromAPointLayerAreTheAreasDepots(@TempDir Path tmp) throws IOException {
+        List<Place> areas = PlaceLayerReader.read(DISTRICTS, null, null);
+        org.locationtech.jts.geom.Point inside = areas.get(0).geometry().getInteriorPoint();
+        double[] depot = {inside.getX(), inside.getY()};
+        List<DistrictBatch.Row> byLayer = DistrictBatch.run(new DistrictBatch.Request(ROADS, ReadOptions.DEFAULTS, DISTRICTS,
+                areas, null, 1000, true, tmp.resolve("layer"), 2, List.of(depot)), line -> { });
+        String withField = Files.readString(DISTRICTS).replaceFirst("\"name\": ?\"Ash District\"",
+                String.format(java.util.Locale.ROOT, "\"name\":\"Ash District\",\"depot\":\"%.9f,%.9f\"", depot[0], depot[1]));
+        assertTrue(withField.contains("\"depot\":"), "the attribute was written");
+        Path fielded = tmp.resolve("fielded.geojson");
+        Files.writeString(fielded, withField);
+        List<DistrictBatch.Row> byField = run(fielded, tmp.resolve("field"), 2, "depot");
+        assertEquals("planned", byLayer.get(0).status(), byLayer.get(0).message());
+        assertEquals(byField.get(0).serviceKm(), byLayer.get(0).serviceKm(), 1e-9);
+        assertEquals(byField.get(0).deadheadKm(), byLayer.get(0).deadheadKm(), 1e-9);
+        for (DistrictBatch.Row row : byLayer.subList(1, byLayer.size())) {
+            assertTrue(row.message().contains("no point of the depot layer lies in the area"), row.message());
+        }
+    }
+
     @Test
     void districtsServiceEveryStreetInsideThemOnceAndThreadsDoNotChangeTheFiles(@TempDir Path tmp) throws IOException {
         List<DistrictBatch.Row> rows = run(DISTRICTS, tmp.resolve("one"), 1, null);
