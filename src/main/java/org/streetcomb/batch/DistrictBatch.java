@@ -1,12 +1,16 @@
 package org.streetcomb.batch;
 
+import com.fasterxml.jackson.databind.ObjectMapper;
+import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.io.IOException;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
+import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
+import java.util.Map;
 import java.util.concurrent.ExecutorService;
 import java.util.concurrent.Executors;
 import java.util.concurrent.Future;
@@ -30,6 +34,12 @@ import org.streetcomb.read.LayerReaders;
 import org.streetcomb.read.Place;
 import org.streetcomb.read.ReadOptions;
 import org.streetcomb.read.RoadLayer;
+import org.streetcomb.report.DistrictIndexLayers;
+import org.streetcomb.report.HtmlReportWriter;
+import org.streetcomb.report.MapReport;
+import org.streetcomb.report.PlanLayers;
+import org.streetcomb.report.QuickLookPng;
+import org.streetcomb.report.ReportCautions;
 import org.streetcomb.scope.AreaChoice;
 import org.streetcomb.scope.ServiceArea;
 import org.streetcomb.timing.StageClock;
@@ -65,6 +75,8 @@ public final class DistrictBatch {
                       double leftOutKm, String message) {
     }
 
+    private static final ObjectMapper JSON = new ObjectMapper();
+
     private DistrictBatch() {
     }
 
@@ -95,6 +107,7 @@ public final class DistrictBatch {
                 rows.add(f.get());
             }
             writeSummary(request.out().resolve("summary.csv"), rows);
+            writeIndex(request, rows);
             return rows;
         } catch (InterruptedException e) {
             Thread.currentThread().interrupt();
@@ -123,7 +136,7 @@ public final class DistrictBatch {
                     request.leaveOutCutOff()).withArea(area);
             PlanRequest planRequest = new PlanRequest(request.roads(), depot, 0.5, 500, false, request.read(), service);
             Plan plan = Planner.plan(planRequest, layer, network, RepairOptions.NONE, new StageClock(StageClock.SILENT));
-            write(request.out().resolve(folder(index, place)), plan, label);
+            write(request.out().resolve(folder(index, place)), plan, label, request);
             double left = 0;
             for (int e : plan.leftOut()) {
                 left += plan.network().length(e);
@@ -175,7 +188,7 @@ public final class DistrictBatch {
         return String.format(Locale.ROOT, "%03d-%s", index + 1, place.id().replaceAll("[^A-Za-z0-9_.-]", "_"));
     }
 
-    private static void write(Path folder, Plan plan, String label) {
+    private static void write(Path folder, Plan plan, String label, Request request) {
         try {
             Files.createDirectories(folder);
         } catch (IOException e) {
@@ -184,6 +197,70 @@ public final class DistrictBatch {
         PlanFiles.write(plan, new FieldFiles(folder.resolve("tour.geojson"), false, folder.resolve("tour.gpx"),
                 new GpxLimits(1, GpxLimits.DEFAULT_TRACK_POINTS, GpxLimits.DEFAULT_ROUTE_POINTS, true), null,
                 folder.resolve("directions.html"), true), new StageClock(StageClock.SILENT));
+        double left = 0;
+        for (int e : plan.leftOut()) {
+            left += plan.network().length(e);
+        }
+        ObjectNode summary = JSON.createObjectNode();
+        summary.put("area", label);
+        summary.put("tour_km", round(plan.tourLength() / 1000));
+        summary.put("service_km", round(plan.serviceLength() / 1000));
+        summary.put("deadhead_km", round(plan.deadheadLength() / 1000));
+        summary.put("left_out_km", round(left / 1000));
+        List<MapReport.Entry> glance = List.of(
+                new MapReport.Entry("Distance", String.format(Locale.ROOT, "%.1f km: %.1f km service, %.1f km deadhead",
+                        plan.tourLength() / 1000, plan.serviceLength() / 1000, plan.deadheadLength() / 1000)),
+                new MapReport.Entry("Left out", left == 0 ? "nothing" : String.format(Locale.ROOT, "%.2f km", left / 1000)));
+        MapReport report = new MapReport("Area: " + label, PlanLayers.of(plan), PlanLayers.groups(plan), summary,
+                List.of(new MapReport.Entry("Roads", request.roads().toString()),
+                        new MapReport.Entry("Areas", request.areasFile().toString())),
+                ReportCautions.PLAN, null, 1, glance);
+        new HtmlReportWriter().write(folder.resolve("report.html"), report);
+        new QuickLookPng(1200, 800).write(folder.resolve("map.png"), report);
+    }
+
+    /** index.html: every area on one map, with its figures on click, and the batch's totals first. */
+    private static void writeIndex(Request request, List<Row> rows) {
+        List<DistrictIndexLayers.Area> areas = new ArrayList<>();
+        double service = 0;
+        double leftOut = 0;
+        long planned = 0;
+        for (Row row : rows) {
+            Place place = request.areas().get(row.index() - 1);
+            boolean ok = row.status().equals("planned");
+            Map<String, String> figures = new LinkedHashMap<>();
+            if (ok) {
+                figures.put("service", String.format(Locale.ROOT, "%.2f km", row.serviceKm()));
+                figures.put("deadhead", String.format(Locale.ROOT, "%.2f km", row.deadheadKm()));
+                figures.put("left out", String.format(Locale.ROOT, "%.2f km", row.leftOutKm()));
+                figures.put("folder", folder(row.index() - 1, place));
+                service += row.serviceKm();
+                leftOut += row.leftOutKm();
+                planned++;
+            } else {
+                figures.put("failed", row.message());
+            }
+            areas.add(new DistrictIndexLayers.Area(row.label(), ok, place.isPolygonal() ? place.geometry() : null, figures));
+        }
+        ObjectNode summary = JSON.createObjectNode();
+        summary.put("areas", rows.size());
+        summary.put("planned", planned);
+        summary.put("failed", rows.size() - planned);
+        summary.put("service_km", round(service));
+        summary.put("left_out_km", round(leftOut));
+        List<MapReport.Entry> glance = List.of(
+                new MapReport.Entry("Areas", String.format(Locale.ROOT, "%d planned, %d failed (summary.csv)", planned,
+                        rows.size() - planned)),
+                new MapReport.Entry("Service", String.format(Locale.ROOT, "%.1f km in all areas", service)),
+                new MapReport.Entry("Left out", String.format(Locale.ROOT, "%.2f km", leftOut)));
+        MapReport report = new MapReport("Districts: " + request.areasFile().getFileName(), DistrictIndexLayers.of(areas),
+                List.of(), summary, List.of(new MapReport.Entry("Roads", request.roads().toString()),
+                        new MapReport.Entry("Areas", request.areasFile().toString())), ReportCautions.PLAN, null, 1, glance);
+        new HtmlReportWriter().write(request.out().resolve("index.html"), report);
+    }
+
+    private static double round(double value) {
+        return Math.round(value * 1000) / 1000.0;
     }
 
     private static void writeSummary(Path file, List<Row> rows) {

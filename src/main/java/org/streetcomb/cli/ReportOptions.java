@@ -15,6 +15,7 @@ import org.streetcomb.report.MapGroup;
 import org.streetcomb.report.MapLayer;
 import org.streetcomb.report.MapReport;
 import org.streetcomb.report.QuickLookPng;
+import org.streetcomb.report.ReportCautions;
 import picocli.CommandLine;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Model.OptionSpec;
@@ -28,17 +29,10 @@ import picocli.CommandLine.Option;
  */
 final class ReportOptions {
 
-    static final List<String> CAUTIONS = List.of(
-            "A plan is advice, not an instruction: obey traffic law and road signs at all times.",
-            "Never handle a phone, tablet or GPS unit while driving; stop safely first.",
-            "Map data may be out of date: streets close, turn bans change and new streets appear.",
-            "Local rules and the operator's own risk assessment come before this plan.");
+    static final List<String> CAUTIONS = ReportCautions.PLAN;
 
     /** The cautions of a report with no tour in it (a health check, an audit without mop-up): checking streets on the ground is driving too. */
-    static final List<String> CHECK_CAUTIONS = List.of(
-            "Map data may be out of date: streets close, one-way rules change and new streets appear.",
-            "When you check streets on the ground, obey traffic law and road signs, and never handle a phone, "
-                    + "tablet or GPS unit while driving.");
+    static final List<String> CHECK_CAUTIONS = ReportCautions.CHECK;
 
     @Option(names = "--report", paramLabel = "FILE.html",
             description = "Write one self-contained HTML page with a map of the result and its summary; it opens "

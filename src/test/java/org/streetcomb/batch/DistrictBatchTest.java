@@ -41,6 +41,33 @@ class DistrictBatchTest {
      * Depots from a point layer: the area holding a point is planned from it, exactly as when the same point
      * is its depot attribute; an area holding none gets a line of its own and the others go on.
      */
+    /**
+     * Each planned area's folder holds its report and picture beside the tour, GPX and sheet, and index.html
+     * maps every area with its figures (the per-area files and the index, issue 17).
+     */
+    @Test
+    void eachAreaHasItsReportAndTheBatchAnIndexMap(@TempDir Path tmp) throws IOException {
+        List<DistrictBatch.Row> rows = run(DISTRICTS, tmp, 2, null);
+        for (DistrictBatch.Row row : rows) {
+            if (row.status().equals("planned")) {
+                Path folder;
+                try (java.util.stream.Stream<Path> folders = Files.list(tmp)) {
+                    folder = folders.filter(f -> f.getFileName().toString().startsWith(String.format("%03d-", row.index())))
+                            .findFirst().orElseThrow();
+                }
+                for (String file : new String[] {"tour.geojson", "tour.gpx", "directions.html", "report.html", "map.png"}) {
+                    assertTrue(Files.size(folder.resolve(file)) > 0, folder + "/" + file);
+                }
+            }
+        }
+        String index = Files.readString(tmp.resolve("index.html"));
+        for (DistrictBatch.Row row : rows) {
+            assertTrue(index.contains(row.label()), "index.html names " + row.label());
+        }
+        long planned = rows.stream().filter(r -> r.status().equals("planned")).count();
+        assertTrue(index.contains("Planned areas (" + planned + ")"), "the index's legend counts the planned areas");
+    }
+
     @Test
     void depotsFromAPointLayerAreTheAreasDepots(@TempDir Path tmp) throws IOException {
         List<Place> areas = PlaceLayerReader.read(DISTRICTS, null, null);
