@@ -86,8 +86,9 @@ public final class TripOptions {
 
     @Option(names = "--trip-restarts", paramLabel = "N",
             description = "Search effort when cutting trips: each unit breeds 25 more candidate solutions; more can "
-                    + "find shorter trips, 0 only improves the tour's own order (default: " + TripPlanner.DEFAULT_RESTARTS
-                    + " for a vehicle's " + TripPlanner.LARGE_TASKS + " streets or fewer, 0 beyond).")
+                    + "find shorter trips, 0 only improves the tour's own order (default: " + TripPlanner.SMALL_RESTARTS
+                    + " for a vehicle's " + TripPlanner.SMALL_TASKS + " streets or fewer, " + TripPlanner.DEFAULT_RESTARTS
+                    + " up to " + TripPlanner.LARGE_TASKS + ", 0 beyond).")
     Integer restarts;
 
     boolean requested() {
