@@ -13,7 +13,6 @@ import java.time.format.DateTimeParseException;
 import java.time.temporal.TemporalAccessor;
 import java.util.Arrays;
 import java.util.function.Consumer;
-import javax.xml.stream.XMLInputFactory;
 import javax.xml.stream.XMLStreamConstants;
 import javax.xml.stream.XMLStreamException;
 import javax.xml.stream.XMLStreamReader;
@@ -64,7 +63,7 @@ public final class GpxTrackReader {
             if (Files.size(file) == 0) {
                 throw InputError.at(file, null, "empty file: expected a GPX document");
             }
-            XMLStreamReader xml = safeFactory().createXMLStreamReader(in);
+            XMLStreamReader xml = SafeXml.factory().createXMLStreamReader(in);
             try {
                 stream.run(xml);
             } finally {
@@ -72,20 +71,13 @@ public final class GpxTrackReader {
             }
         } catch (XMLStreamException e) {
             String place = e.getLocation() == null ? null : "line " + e.getLocation().getLineNumber();
-            throw InputError.at(file, place, "not well-formed XML: " + XmlReason.of(e.getMessage()));
+            throw InputError.at(file, place, "not well-formed XML: " + SafeXml.reason(e.getMessage()));
         } catch (IOException e) {
             throw InputError.at(file, null, "cannot read: " + e.getMessage());
         }
         return stream.contents();
     }
 
-    private static XMLInputFactory safeFactory() {
-        XMLInputFactory factory = XMLInputFactory.newFactory();
-        factory.setProperty(XMLInputFactory.SUPPORT_DTD, false);
-        factory.setProperty(XMLInputFactory.IS_SUPPORTING_EXTERNAL_ENTITIES, false);
-        factory.setProperty(XMLInputFactory.IS_REPLACING_ENTITY_REFERENCES, false);
-        return factory;
-    }
 
     /** A track's name on one line, at most {@value #NAME_LENGTH} characters, for messages and maps. */
     private static String shortened(String name) {

@@ -11,7 +11,6 @@ import java.util.Map;
 import java.util.Set;
 import java.util.zip.GZIPInputStream;
 import javax.xml.stream.Location;
-import javax.xml.stream.XMLInputFactory;
 import javax.xml.stream.XMLStreamConstants;
 import javax.xml.stream.XMLStreamException;
 import javax.xml.stream.XMLStreamReader;
@@ -35,19 +34,12 @@ final class OsmXmlSource implements OsmSource {
         this.keys = keys;
     }
 
-    static XMLInputFactory safeFactory() {
-        XMLInputFactory factory = XMLInputFactory.newFactory();
-        factory.setProperty(XMLInputFactory.SUPPORT_DTD, false);
-        factory.setProperty(XMLInputFactory.IS_SUPPORTING_EXTERNAL_ENTITIES, false);
-        factory.setProperty(XMLInputFactory.IS_REPLACING_ENTITY_REFERENCES, false);
-        return factory;
-    }
 
     @Override
     public void stream(OsmSink sink, boolean nodes, boolean ways) {
         XMLStreamReader xml = null;
         try (InputStream in = open()) {
-            xml = safeFactory().createXMLStreamReader(in);
+            xml = SafeXml.factory().createXMLStreamReader(in);
             read(xml, sink, nodes, ways);
         } catch (XMLStreamException e) {
             if (e.getNestedException() instanceof IOException damaged) {
@@ -57,7 +49,7 @@ final class OsmXmlSource implements OsmSource {
             }
             Location at = e.getLocation();
             throw InputError.at(file, at == null ? null : "line " + at.getLineNumber() + ", column " + at.getColumnNumber(),
-                    "malformed OSM XML: " + XmlReason.of(e.getMessage()));
+                    "malformed OSM XML: " + SafeXml.reason(e.getMessage()));
         } catch (IOException e) {
             throw InputError.at(file, null, "cannot read: " + e.getMessage());
         } finally {

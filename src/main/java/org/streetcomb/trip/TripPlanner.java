@@ -320,11 +320,8 @@ public final class TripPlanner {
      * while that shortens it.
      */
     private List<Trip> trips(Tasks tasks, List<int[]> refs, Distances distances) {
-        EdgeBearings bearings = EdgeBearings.of(network);
-        TurnCostPath turning = new TurnCostPath(network, (in, node, out) -> network.degree(node) > 1
-                && Turn.between(bearings, TrafficSide.RIGHT, in >> 1, (in & 1) == 0, out >> 1, (out & 1) == 0).kind()
-                == TurnKind.U_TURN ? settings.turnBackMetres() : 0);
         TurnCostPath shortest = new TurnCostPath(network, (in, node, out) -> 0);
+        TurnCostPath turning = settings.turnBackMetres() > 0 ? turnBackPricing() : shortest;
         List<Trip> trips = new ArrayList<>();
         for (int[] trip : refs) {
             int[][] services = new int[trip.length][];
@@ -346,7 +343,7 @@ public final class TripPlanner {
             }
             Tour tour = driven(turning, services, from, to);
             double length = tour.length(network);
-            if (!settings.limit().allows(service, length - service, demand)) {
+            if (turning != shortest && !settings.limit().allows(service, length - service, demand)) {
                 // the detours that spare U-turns must not break the trip's limit: then drive it shortest
                 tour = driven(shortest, services, from, to);
                 length = tour.length(network);
@@ -359,6 +356,14 @@ public final class TripPlanner {
             trips.add(new Trip(tour, length, service, demand, over));
         }
         return trips;
+    }
+
+    /** Drives that charge {@link Settings#turnBackMetres()} for each U-turn where another street goes on. */
+    private TurnCostPath turnBackPricing() {
+        EdgeBearings bearings = EdgeBearings.of(network);
+        return new TurnCostPath(network, (in, node, out) -> network.degree(node) > 1
+                && Turn.between(bearings, TrafficSide.RIGHT, in >> 1, (in & 1) == 0, out >> 1, (out & 1) == 0).kind()
+                == TurnKind.U_TURN ? settings.turnBackMetres() : 0);
     }
 
     /** The trip driven through its services, again in the order first serviced while that shortens it. */
