@@ -87,10 +87,11 @@ public final class PlanCommand implements Callable<Integer> {
         PlanSummary summary = PlanSummary.of(plan, clock.stages(), out);
         summary.add(fieldSection);
         if (report.requested()) {
+            // the map's layers cost seconds on large networks: built only for a report
             summary.add(report.section());
+            report.write("Plan: " + input.getFileName(), PlanLayers.of(plan), PlanLayers.groups(plan), summary.json(),
+                    summary.glance(), clock);
         }
-        report.write("Plan: " + input.getFileName(), PlanLayers.of(plan), PlanLayers.groups(plan), summary.json(),
-                summary.glance(), clock);
         stdout.print(json ? summary.toJson() : summary.toText());
         stdout.flush();
         return ExitCode.OK;

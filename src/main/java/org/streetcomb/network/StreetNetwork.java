@@ -16,6 +16,9 @@ import org.streetcomb.read.Travel;
  */
 public final class StreetNetwork {
 
+    /** {@code Travel.values()} copies the array on every call; edge travel is read in every search step. */
+    private static final Travel[] TRAVEL = Travel.values();
+
     private final double[] nodeLon;
     private final double[] nodeLat;
     private final int[] edgeFrom;
@@ -147,7 +150,7 @@ public final class StreetNetwork {
     }
 
     public Travel travel(int edge) {
-        return Travel.values()[edgeTravel[edge]];
+        return TRAVEL[edgeTravel[edge]];
     }
 
     public boolean required(int edge) {

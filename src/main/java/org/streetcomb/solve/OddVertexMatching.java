@@ -2,17 +2,14 @@ package org.streetcomb.solve;
 
 import java.util.ArrayList;
 import java.util.Arrays;
-import java.util.HashMap;
+import java.util.Comparator;
 import java.util.List;
 import java.util.Map;
 import java.util.Set;
 import java.util.stream.IntStream;
-import org.jgrapht.Graph;
 import org.jgrapht.alg.interfaces.MatchingAlgorithm;
 import org.jgrapht.alg.matching.blossom.v5.KolmogorovWeightedPerfectMatching;
 import org.jgrapht.alg.matching.blossom.v5.ObjectiveSense;
-import org.jgrapht.graph.DefaultWeightedEdge;
-import org.jgrapht.graph.SimpleWeightedGraph;
 import org.streetcomb.network.DijkstraSearch;
 import org.streetcomb.network.StreetNetwork;
 
@@ -29,8 +26,11 @@ import org.streetcomb.network.StreetNetwork;
  * any pair whose reduced cost is negative is added as a candidate and the matching is solved again.
  * When no such pair is left, the dual is feasible for the complete graph and equals the primal cost, so
  * the matching is optimal there: the result is exact, not a heuristic. Pricing all pairs takes local
- * multi-source searches rather than T full ones ({@link DualPricing}). On street networks two to four
- * rounds suffice; the candidate set only grows, so the loop ends.
+ * multi-source searches rather than T full ones ({@link DualPricing}). On street networks two to five
+ * rounds suffice; the candidate set only grows, so the loop ends. Blossom V gets the candidates as a
+ * primitive read-only graph ({@link CandidateGraph}) and they are kept in a primitive map
+ * ({@link PairDistances}). Re-solving only a region around the violated pairs was tried and rejected: the
+ * region's own optimal dual lifts the potentials at its border, and the violations grew round after round.
  *
  * <p>Distances are passed to Blossom V in kilometres: it is known to misbehave on badly scaled inputs and
  * treats costs above 1e10 as forbidden.
@@ -50,7 +50,7 @@ public final class OddVertexMatching {
     private final int[] odd;
     private final int[] oddIndex;
     /** Candidate pairs keyed by i * T + j (i &lt; j, indices into {@link #odd}), value metres. */
-    private final Map<Long, Double> candidates = new HashMap<>();
+    private final PairDistances candidates = new PairDistances();
     private final DualPricing pricing;
 
     private OddVertexMatching(StreetNetwork network, int[] odd) {
@@ -86,22 +86,28 @@ public final class OddVertexMatching {
                 // the candidate graph has no perfect matching: widen it
                 k *= 2;
                 addNearest(k);
-            } else if (addViolatedPairs(solution) == 0) {
-                return new Result(solution.pairs, solution.cost, rounds, candidates.size());
+                continue;
+            }
+            long[] violated = pricing.violatedPairs(solution.potential, solution.blossoms);
+            if (addPairs(violated) == 0) {
+                // no pair prices below zero, or only pairs already solved over (within rounding)
+                return new Result(solution.pairs(odd), solution.cost, rounds, candidates.size());
             }
         }
     }
 
-    /** Prices the solution against all pairs and adds the violated ones with their exact distance. */
-    private int addViolatedPairs(Solution solution) {
-        long[] violated = pricing.violatedPairs(solution.potential, solution.blossoms);
-        DijkstraSearch search = new DijkstraSearch(network);
+    /** Adds the pairs the pricing found, with their exact distance (one search per pair, on every core). */
+    private int addPairs(long[] pairs) {
+        ThreadLocal<DijkstraSearch> searches = ThreadLocal.withInitial(() -> new DijkstraSearch(network));
+        double[] distance = new double[pairs.length];
+        IntStream.range(0, pairs.length).parallel().forEach(p -> {
+            DijkstraSearch search = searches.get();
+            search.start(odd[(int) (pairs[p] / odd.length)]);
+            distance[p] = search.runTo(odd[(int) (pairs[p] % odd.length)]);
+        });
         int added = 0;
-        for (long key : violated) {
-            int i = (int) (key / odd.length);
-            int j = (int) (key % odd.length);
-            search.start(odd[i]);
-            if (candidates.putIfAbsent(key, search.runTo(odd[j])) == null) {
+        for (int p = 0; p < pairs.length; p++) {
+            if (candidates.putIfAbsent(pairs[p], distance[p])) {
                 added++;
             }
         }
@@ -140,41 +146,53 @@ public final class OddVertexMatching {
         return i < j ? (long) i * odd.length + j : (long) j * odd.length + i;
     }
 
-    /** A matching with its dual: potential[u] = Y(u), the node dual plus all blossom duals holding u. */
-    private record Solution(int[] pairs, double cost, double[] potential, List<Map.Entry<int[], Double>> blossoms) {
+    /**
+     * A matching with its dual: mate per odd index; potential[u] = Y(u), the node dual plus all blossom duals
+     * holding u; the blossoms with a positive dual (member odd indices, dual in metres); the cost in metres.
+     */
+    private record Solution(int[] mate, double cost, double[] potential, List<Map.Entry<int[], Double>> blossoms) {
+
+        int[] pairs(int[] odd) {
+            int[] pairs = new int[mate.length];
+            int p = 0;
+            for (int i = 0; i < mate.length; i++) {
+                if (i < mate[i]) {
+                    pairs[p++] = odd[i];
+                    pairs[p++] = odd[mate[i]];
+                }
+            }
+            return pairs;
+        }
     }
 
-    /** Blossom V on the candidate graph; null when it has no perfect matching. */
+    /** Blossom V on the candidate graph, with its dual; null when it has no perfect matching. */
     private Solution blossom() {
-        Graph<Integer, DefaultWeightedEdge> graph = new SimpleWeightedGraph<>(DefaultWeightedEdge.class);
-        for (int i = 0; i < odd.length; i++) {
-            graph.addVertex(i);
+        long[] keys = candidates.sortedKeys();
+        int[] source = new int[keys.length];
+        int[] target = new int[keys.length];
+        double[] metres = new double[keys.length];
+        double[] kilometres = new double[keys.length];
+        for (int e = 0; e < keys.length; e++) {
+            source[e] = (int) (keys[e] / odd.length);
+            target[e] = (int) (keys[e] % odd.length);
+            metres[e] = candidates.get(keys[e]);
+            kilometres[e] = metres[e] / 1000.0;
         }
-        long[] keys = candidates.keySet().stream().mapToLong(Long::longValue).sorted().toArray();
-        for (long key : keys) {
-            DefaultWeightedEdge edge = graph.addEdge((int) (key / odd.length), (int) (key % odd.length));
-            graph.setEdgeWeight(edge, candidates.get(key) / 1000.0);
-        }
-        KolmogorovWeightedPerfectMatching<Integer, DefaultWeightedEdge> blossom =
+        CandidateGraph graph = new CandidateGraph(odd.length, source, target, kilometres);
+        KolmogorovWeightedPerfectMatching<Integer, Integer> blossom =
                 new KolmogorovWeightedPerfectMatching<>(graph, ObjectiveSense.MINIMIZE);
-        MatchingAlgorithm.Matching<Integer, DefaultWeightedEdge> matching;
+        MatchingAlgorithm.Matching<Integer, Integer> matching;
         try {
             matching = blossom.getMatching();
         } catch (IllegalArgumentException noPerfectMatching) {
             return null;
         }
-        int[] pairs = new int[odd.length];
-        int p = 0;
+        int[] mate = new int[odd.length];
         double cost = 0;
-        List<DefaultWeightedEdge> edges = new ArrayList<>(matching.getEdges());
-        edges.sort((a, b) -> Integer.compare(Math.min(graph.getEdgeSource(a), graph.getEdgeTarget(a)),
-                Math.min(graph.getEdgeSource(b), graph.getEdgeTarget(b))));
-        for (DefaultWeightedEdge edge : edges) {
-            int i = graph.getEdgeSource(edge);
-            int j = graph.getEdgeTarget(edge);
-            pairs[p++] = odd[i];
-            pairs[p++] = odd[j];
-            cost += candidates.get(key(i, j));
+        for (int e : matching.getEdges()) {
+            mate[source[e]] = target[e];
+            mate[target[e]] = source[e];
+            cost += metres[e];
         }
         double[] potential = new double[odd.length];
         List<Map.Entry<int[], Double>> blossoms = new ArrayList<>();
@@ -189,6 +207,12 @@ public final class OddVertexMatching {
                 blossoms.add(Map.entry(members, value));
             }
         }
-        return new Solution(pairs, cost, potential, blossoms);
+        blossoms.sort(BLOSSOM_ORDER);
+        return new Solution(mate, cost, potential, blossoms);
     }
+
+    /** Blossoms by their smallest member, larger first: an order that does not depend on hashing. */
+    private static final Comparator<Map.Entry<int[], Double>> BLOSSOM_ORDER = Comparator
+            .<Map.Entry<int[], Double>>comparingInt(b -> b.getKey()[0])
+            .thenComparing(b -> -b.getKey().length);
 }
