@@ -72,6 +72,12 @@ public record Plan(PlanRequest request, ReadReport read, StreetNetwork network, 
         return 0;
     }
 
+    @Override
+    public int[] reloads() {
+        return hasTrips() ? arranged.fleet().settings().reloads().stream().mapToInt(Integer::intValue)
+                .filter(node -> node != depot).distinct().toArray() : new int[0];
+    }
+
     /** Whether the tours are trips of a fleet (then written and labelled as trips). */
     public boolean hasTrips() {
         return arranged != null && arranged.fleet() != null;

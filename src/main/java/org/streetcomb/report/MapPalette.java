@@ -33,6 +33,8 @@ public final class MapPalette {
     static final String DEPOT = "#d55e00";
     /** Where each separate part's tour starts. */
     static final String STARTS = "#333333";
+    /** Tol's olive: reload points, where a fleet's trips end to reload and the next one leaves. */
+    static final String RELOADS = "#999933";
     /** Tol's indigo: the outline of a service area. */
     static final String AREA = "#332288";
     /** Okabe–Ito yellow: streets asked for but left out of the plan, in the plan's and the audit's maps alike. */

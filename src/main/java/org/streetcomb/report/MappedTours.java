@@ -24,6 +24,11 @@ public interface MappedTours {
         return 0;
     }
 
+    /** Nodes besides the depot where a fleet's vehicles may reload between trips (a salt barn, a tip). */
+    default int[] reloads() {
+        return new int[0];
+    }
+
     /** The area the streets were serviced in, or null for the whole layer. */
     default ServiceArea area() {
         return null;

@@ -159,6 +159,11 @@ public final class PlanLayers {
             layers.add(new MapLayer("steps", "Step numbers", "the first step of each run on one street",
                     MapLayer.Kind.LABELS, MapStyle.solid(MapPalette.ARROWS, 1, 1), false, labels));
         }
+        List<MapFeature> reloads = reloadPoints();
+        if (!reloads.isEmpty()) {
+            layers.add(new MapLayer("reloads", "Reload points", "where a trip may end to reload and the next one leave",
+                    MapLayer.Kind.POINTS, MapStyle.solid(MapPalette.RELOADS, 12, 1), true, reloads));
+        }
         List<MapFeature> otherStarts = starts(false);
         if (!otherStarts.isEmpty()) {
             layers.add(new MapLayer("starts", "Tour starts", "where each separate part's tour starts and ends",
@@ -169,22 +174,56 @@ public final class PlanLayers {
         return layers;
     }
 
+    /** Each reload point, with the trips that end and leave there. */
+    private List<MapFeature> reloadPoints() {
+        List<MapFeature> points = new ArrayList<>();
+        for (int node : plan.reloads()) {
+            List<String> ending = new ArrayList<>();
+            List<String> leaving = new ArrayList<>();
+            for (int t = 0; t < plan.tours().size(); t++) {
+                if (plan.tours().get(t).end(network) == node) {
+                    ending.add(String.valueOf(t + 1));
+                }
+                if (plan.tours().get(t).start() == node) {
+                    leaving.add(String.valueOf(t + 1));
+                }
+            }
+            Map<String, String> details = new LinkedHashMap<>();
+            details.put("Node", String.valueOf(node));
+            details.put("Position", String.format(Locale.ROOT, "%.7f, %.7f", network.lon(node), network.lat(node)));
+            details.put("Trips ending here", ending.isEmpty() ? "none" : String.join(", ", ending));
+            details.put("Trips leaving here", leaving.isEmpty() ? "none" : String.join(", ", leaving));
+            points.add(MapFeature.point(network.lon(node), network.lat(node), null, "Reload point", details));
+        }
+        return points;
+    }
+
     /** The depot, or the start of every tour but the depot's, each a point with its node and position. */
     private List<MapFeature> starts(boolean depot) {
         List<MapFeature> starts = new ArrayList<>();
         for (int t = 0; t < plan.tours().size(); t++) {
             int node = plan.tours().get(t).start();
-            if ((node == plan.depot()) != depot) {
+            if ((node == plan.depot()) != depot || !depot && isReload(node)) {
                 continue;
             }
             Map<String, String> details = new LinkedHashMap<>();
             details.put("Node", String.valueOf(node));
             details.put("Position", String.format(Locale.ROOT, "%.7f, %.7f", network.lon(node), network.lat(node)));
             String walk = noun.toLowerCase(Locale.ROOT) + " " + (t + 1);
-            String label = depot ? "Depot: start and end of " + walk : "Start and end of " + walk;
+            boolean back = plan.tours().get(t).end(network) == node;
+            String label = depot ? (back ? "Depot: start and end of " : "Depot: start of ") + walk : "Start and end of " + walk;
             starts.add(MapFeature.point(network.lon(node), network.lat(node), groupId(t), label, details));
         }
         return starts;
+    }
+
+    private boolean isReload(int node) {
+        for (int r : plan.reloads()) {
+            if (r == node) {
+                return true;
+            }
+        }
+        return false;
     }
 
     /** Splits a tour into runs of consecutive steps on one street with one kind of pass. */

@@ -8,6 +8,7 @@ import java.util.Random;
 import java.util.function.Consumer;
 import java.util.function.IntPredicate;
 import java.util.function.Supplier;
+import java.util.function.ToDoubleFunction;
 import java.util.stream.IntStream;
 import org.streetcomb.network.StreetNetwork;
 import org.streetcomb.network.TurnCostPath;
@@ -174,6 +175,8 @@ public final class TripPlanner {
         boolean improve = table != null;
         Distances direct = improve ? table : new LazyDistances(network, depot);
         Distances distances = homes.length > 1 ? new NearestHome(direct, depot, homes) : direct;
+        // one vehicle's trips through reload points: the day is priced and cut as a chain of homes
+        boolean chained = homes.length > 1 && settings.vehicles() == 0;
         int[][] neighbours = improve ? TripLocalSearch.neighbours(tasks, distances) : null;
         List<int[]> best = solve(tasks, distances, neighbours, order, improve);
         int restarts = effort != AUTO ? effort : tasks.size() <= SMALL_TASKS ? SMALL_RESTARTS
@@ -188,11 +191,17 @@ public final class TripPlanner {
             int[] drawn = {0};
             Supplier<int[]> orders = () -> drawn[0]++ % 2 == 0 ? nearestTaskOrder(tasks, distances, random)
                     : shuffled(tasks.size(), random);
+            ToDoubleFunction<List<int[]>> scored = chained ? trips -> ReloadChainSplit.split(tasks, direct, homes,
+                    settings.limit(), trips).cost() : trips -> score(tasks, distances, trips, measure);
             best = new MemeticSearch((giant, improveIt) -> solve(tasks, distances, neighbours, giant, improveIt),
-                    trips -> score(tasks, distances, trips, measure), random, progress)
-                    .run(best, orders, restarts * CHILDREN_PER_RESTART);
+                    scored, random, progress).run(best, orders, restarts * CHILDREN_PER_RESTART);
         }
-        return new Result(trips(tasks, best, distances), improve, tasks.size(), improve && restarts > 0);
+        if (chained) {
+            ReloadChainSplit.Chain chain = ReloadChainSplit.split(tasks, direct, homes, settings.limit(), best);
+            return new Result(trips(tasks, chain.trips(), distances, chain.homes()), improve, tasks.size(),
+                    improve && restarts > 0);
+        }
+        return new Result(trips(tasks, best, distances, null), improve, tasks.size(), improve && restarts > 0);
     }
 
     /** Total cost, or for k vehicles the longest trip's measure first (scaled to dominate), then total cost. */
@@ -319,11 +328,12 @@ public final class TripPlanner {
      * ({@link EarliestService}) and the trip is driven again between its services in their new order,
      * while that shortens it.
      */
-    private List<Trip> trips(Tasks tasks, List<int[]> refs, Distances distances) {
+    private List<Trip> trips(Tasks tasks, List<int[]> refs, Distances distances, List<int[]> ends) {
         TurnCostPath shortest = new TurnCostPath(network, (in, node, out) -> 0);
         TurnCostPath turning = settings.turnBackMetres() > 0 ? turnBackPricing() : shortest;
         List<Trip> trips = new ArrayList<>();
-        for (int[] trip : refs) {
+        for (int r = 0; r < refs.size(); r++) {
+            int[] trip = refs.get(r);
             int[][] services = new int[trip.length][];
             double service = 0;
             double demand = 0;
@@ -337,7 +347,10 @@ public final class TripPlanner {
             }
             int from = depot;
             int to = depot;
-            if (distances instanceof NearestHome home) {
+            if (ends != null) {
+                from = ends.get(r)[0];
+                to = ends.get(r)[1];
+            } else if (distances instanceof NearestHome home) {
                 from = home.nearestFrom(services[0][1]);
                 to = home.nearestTo(services[services.length - 1][2]);
             }

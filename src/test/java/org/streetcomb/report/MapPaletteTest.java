@@ -22,6 +22,7 @@ class MapPaletteTest {
         Map<String, String> legend = new LinkedHashMap<>(Map.of("streets", MapPalette.STREETS, "deadhead",
                 MapPalette.DEADHEAD, "arrows", MapPalette.ARROWS, "depot", MapPalette.DEPOT, "starts", MapPalette.STARTS,
                 "area", MapPalette.AREA, "left out", MapPalette.LEFT_OUT));
+        legend.put("reload points", MapPalette.RELOADS);
         for (int v = 0; v < MapPalette.TOURS.size(); v++) {
             legend.put("vehicle " + (v + 1), MapPalette.tour(v));
         }
