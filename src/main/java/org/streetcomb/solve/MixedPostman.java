@@ -27,9 +27,10 @@ import org.streetcomb.read.Travel;
  *     problem (never longer); the same is done for the orientation the LP bound's solution leans to
  *     ({@link MixedLpBound}: each two-way street in the direction the LP drives more, MIXED2's where it
  *     is even), and the shorter is kept;</li>
- * <li>single service directions are flipped and the flow re-solved while that shortens the tour (at most
- *     {@link #FLIPS} trials), in the spirit of the improvement procedures of Pearn &amp; Liu (Computers
- *     &amp; OR 22, 1995).</li>
+ * <li>single service directions are flipped while that shortens the tour, each flip priced exactly on the
+ *     flow's residual network from its potentials ({@link FlipPricing}; at most {@link #FLIP_TRIALS}
+ *     trials), in the spirit of the improvement procedures of Pearn &amp; Liu (Computers &amp; OR 22, 1995),
+ *     and the flow re-solved once for the flipped passes.</li>
  * </ol>
  * Lower bound: the largest of the undirected relaxation (service plus a minimum-cost pairing of odd nodes,
  * one-way restrictions ignored), the INOUTDEGREE flow (service plus the flow's cost, parity relaxed) and
@@ -38,11 +39,11 @@ import org.streetcomb.read.Travel;
  */
 public final class MixedPostman implements PostmanSolver {
 
-    /** Single-street direction flips tried in the local search, each one flow solve. */
-    static final int FLIPS = 300;
-
-    /** Flip trials are also limited to this many edge-solves in all, so large networks stay fast. */
-    static final int FLIP_WORK = 100_000;
+    /**
+     * Single-street direction flips tried in the local search, each a few bounded shortest-path searches
+     * ({@link FlipPricing}); passes over the candidates repeat while one is kept.
+     */
+    static final int FLIP_TRIALS = 200_000;
 
     /**
      * Work budget for the LP bound's cutting planes, in work and not in time so that a plan is the same on any
@@ -82,7 +83,7 @@ public final class MixedPostman implements PostmanSolver {
 
     @Override
     public String complexity() {
-        return "a few minimum-cost flows and one Blossom V pairing, plus one flow per direction flip tried (at most FLIPS) and the LP rounds (at most LP_ROUNDS)";
+        return "a few minimum-cost flows and one Blossom V pairing, plus bounded shortest-path searches per direction flip tried (at most FLIP_TRIALS) and one flow after them and the LP rounds (at most LP_ROUNDS)";
     }
 
     @Override
@@ -127,28 +128,38 @@ public final class MixedPostman implements PostmanSolver {
                 start = "LP-guided";
             }
         }
+        // direction flips, each priced exactly by a few shortest paths on the flow's residual network
+        FlipPricing pricing = new FlipPricing(network, serviceAlong, serviceAgainst, best);
+        int[] keptAlong = serviceAlong.clone();
+        int[] keptAgainst = serviceAgainst.clone();
         int flips = 0;
         int tried = 0;
-        int budget = Math.min(FLIPS, Math.max(10, FLIP_WORK / Math.max(1, m)));
         boolean improved = true;
-        while (improved && tried < budget) {
+        while (improved && tried < FLIP_TRIALS) {
             improved = false;
-            for (int e : flipCandidates(network, demand, along, serviceAlong, best.potential())) {
-                if (tried == budget) {
+            for (int e : flipCandidates(network, demand, along, serviceAlong, pricing.potential())) {
+                if (tried == FLIP_TRIALS) {
                     break;
                 }
                 tried++;
                 int k = demand.either()[e];
                 boolean forward = serviceAlong[e] - along[e] >= k;
-                move(forward ? serviceAlong : serviceAgainst, forward ? serviceAgainst : serviceAlong, e, k);
-                DirectedPostman.Balanced trial = DirectedPostman.balanced(problem, serviceAlong, serviceAgainst);
-                if (trial.traversals().length(network) < best.traversals().length(network) - 1e-9) {
-                    best = trial;
+                if (pricing.tryFlip(e, forward ? network.from(e) : network.to(e), k)) {
+                    move(forward ? serviceAlong : serviceAgainst, forward ? serviceAgainst : serviceAlong, e, k);
                     flips++;
                     improved = true;
-                    break;
                 }
-                move(forward ? serviceAgainst : serviceAlong, forward ? serviceAlong : serviceAgainst, e, k);
+            }
+        }
+        if (flips > 0) {
+            // one exact re-solve for the flipped passes: the tour's traversals, and a check on the pricing
+            DirectedPostman.Balanced flipped = DirectedPostman.balanced(problem, serviceAlong, serviceAgainst);
+            if (flipped.traversals().length(network) < best.traversals().length(network) - 1e-9) {
+                best = flipped;
+            } else {
+                serviceAlong = keptAlong;
+                serviceAgainst = keptAgainst;
+                flips = 0;
             }
         }
         double service = demand.length(network);
