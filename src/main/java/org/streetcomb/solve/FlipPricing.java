@@ -1,6 +1,7 @@
 package org.streetcomb.solve;
 
 import java.util.Arrays;
+import org.streetcomb.network.MinHeap;
 import org.streetcomb.network.StreetNetwork;
 import org.streetcomb.read.Travel;
 
@@ -34,9 +35,7 @@ final class FlipPricing {
     private final int[] settled;
     private final int[] predEdge;
     private int stamp;
-    private int[] heapNode = new int[64];
-    private double[] heapKey = new double[64];
-    private int heapSize;
+    private final MinHeap heap = new MinHeap();
     private final int[] settledList;
     private int settledCount;
     /** Undo log of the trial under way. */
@@ -190,13 +189,14 @@ final class FlipPricing {
     private boolean search(int u, int v, double radius) {
         stamp++;
         settledCount = 0;
-        heapSize = 0;
+        heap.clear();
         dist[u] = 0;
         seen[u] = stamp;
-        push(u, 0);
-        while (heapSize > 0) {
-            double key = heapKey[0];
-            int x = pop();
+        heap.push(0, u);
+        while (!heap.isEmpty()) {
+            double key = heap.peekKey();
+            int x = heap.peekValue();
+            heap.pop();
             if (settled[x] == stamp || key > dist[x]) {
                 continue;
             }
@@ -231,54 +231,10 @@ final class FlipPricing {
                     seen[y] = stamp;
                     dist[y] = d;
                     predEdge[y] = e;
-                    push(y, d);
+                    heap.push(d, y);
                 }
             }
         }
         return false;
-    }
-
-    private void push(int node, double key) {
-        if (heapSize == heapNode.length) {
-            heapNode = Arrays.copyOf(heapNode, 2 * heapSize);
-            heapKey = Arrays.copyOf(heapKey, 2 * heapSize);
-        }
-        int i = heapSize++;
-        while (i > 0) {
-            int parent = (i - 1) / 2;
-            if (heapKey[parent] <= key) {
-                break;
-            }
-            heapNode[i] = heapNode[parent];
-            heapKey[i] = heapKey[parent];
-            i = parent;
-        }
-        heapNode[i] = node;
-        heapKey[i] = key;
-    }
-
-    private int pop() {
-        int top = heapNode[0];
-        int lastNode = heapNode[--heapSize];
-        double lastKey = heapKey[heapSize];
-        int i = 0;
-        while (true) {
-            int child = 2 * i + 1;
-            if (child >= heapSize) {
-                break;
-            }
-            if (child + 1 < heapSize && heapKey[child + 1] < heapKey[child]) {
-                child++;
-            }
-            if (heapKey[child] >= lastKey) {
-                break;
-            }
-            heapNode[i] = heapNode[child];
-            heapKey[i] = heapKey[child];
-            i = child;
-        }
-        heapNode[i] = lastNode;
-        heapKey[i] = lastKey;
-        return top;
     }
 }
