@@ -70,9 +70,13 @@ public final class DistrictBatch {
         }
     }
 
-    /** One row of the summary. */
+    /** One row of the summary (serialisable, so a cluster's workers can hand it back). */
     public record Row(int index, String id, String label, String status, double serviceKm, double deadheadKm,
-                      double leftOutKm, String message) {
+                      double leftOutKm, String message) implements java.io.Serializable {
+    }
+
+    /** The road layer and its network, read and built once per process and shared by every area planned there. */
+    public record Roads(RoadLayer layer, StreetNetwork network) {
     }
 
     private static final ObjectMapper JSON = new ObjectMapper();
@@ -81,14 +85,9 @@ public final class DistrictBatch {
     }
 
     public static List<Row> run(Request request, Consumer<String> progress) {
-        RoadLayer layer = LayerReaders.read(request.roads(), request.read());
-        StreetNetwork network = new NetworkBuilder(0.5).build(layer);
+        Roads roads = roads(request);
         List<Place> areas = request.areas();
-        try {
-            Files.createDirectories(request.out());
-        } catch (IOException e) {
-            throw InputError.at(request.out(), null, "cannot create the output folder: " + e.getMessage());
-        }
+        createOut(request);
         AtomicInteger done = new AtomicInteger();
         ExecutorService pool = Executors.newFixedThreadPool(Math.max(1, request.threads()));
         try {
@@ -96,7 +95,7 @@ public final class DistrictBatch {
             for (int i = 0; i < areas.size(); i++) {
                 final int index = i;
                 futures.add(pool.submit(() -> {
-                    Row row = planOne(request, layer, network, index);
+                    Row row = planArea(request, roads, index);
                     progress.accept(String.format(Locale.ROOT, "area %d of %d (%s): %s%s", done.incrementAndGet(),
                             areas.size(), row.label(), row.status(), row.message().isEmpty() ? "" : ": " + row.message()));
                     return row;
@@ -106,8 +105,7 @@ public final class DistrictBatch {
             for (Future<Row> f : futures) {
                 rows.add(f.get());
             }
-            writeSummary(request.out().resolve("summary.csv"), rows);
-            writeIndex(request, rows);
+            finish(request, rows);
             return rows;
         } catch (InterruptedException e) {
             Thread.currentThread().interrupt();
@@ -117,6 +115,35 @@ public final class DistrictBatch {
         } finally {
             pool.shutdown();
         }
+    }
+
+    /** Reads the road layer and builds its network (once per process; a cluster does it once per worker). */
+    public static Roads roads(Request request) {
+        RoadLayer layer = LayerReaders.read(request.roads(), request.read());
+        return new Roads(layer, new NetworkBuilder(0.5).build(layer));
+    }
+
+    /** Creates the output folder. */
+    public static void createOut(Request request) {
+        try {
+            Files.createDirectories(request.out());
+        } catch (IOException e) {
+            throw InputError.at(request.out(), null, "cannot create the output folder: " + e.getMessage());
+        }
+    }
+
+    /** Writes summary.csv and index.html from every area's row, in the layer's order. */
+    public static void finish(Request request, List<Row> rows) {
+        writeSummary(request.out().resolve("summary.csv"), rows);
+        writeIndex(request, rows);
+    }
+
+    /**
+     * Plans area {@code index} (from 0) of the request and writes its folder; an area that cannot be planned
+     * gives a failed row and no folder.
+     */
+    public static Row planArea(Request request, Roads roads, int index) {
+        return planOne(request, roads.layer(), roads.network(), index);
     }
 
     private static Row planOne(Request request, RoadLayer layer, StreetNetwork network, int index) {

@@ -74,8 +74,17 @@ public final class DistrictsCommand implements Callable<Integer> {
     @CommandLine.Spec
     CommandLine.Model.CommandSpec spec;
 
-    @Override
-    public Integer call() {
+    /**
+     * The batch that {@code args} (this command's arguments) ask for, validated as the command line does: for
+     * another runner of the same batch (a cluster job), so both plan exactly the same areas the same way.
+     */
+    public static DistrictBatch.Request request(String... args) {
+        CommandLine line = new CommandLine(new DistrictsCommand());
+        line.parseArgs(args);
+        return ((DistrictsCommand) line.getCommand()).request();
+    }
+
+    private DistrictBatch.Request request() {
         if (!(margin >= 0) || Double.isInfinite(margin)) {
             throw new CommandLine.ParameterException(spec.commandLine(), "--area-margin must be 0 or more metres");
         }
@@ -86,23 +95,28 @@ public final class DistrictsCommand implements Callable<Integer> {
         if (depots != null && depotField != null) {
             throw new CommandLine.ParameterException(spec.commandLine(), "give --depots or --depot-field, not both");
         }
+        return new DistrictBatch.Request(roads, layer.readOptions(), areas, PlaceLayerReader.read(areas, areaCrs, areaTable),
+                depotField, margin, leaveOutCutOff, out, cores,
+                depots == null ? null : PlaceLayerReader.points(depots, "--depots"));
+    }
+
+    @Override
+    public Integer call() {
+        DistrictBatch.Request request = request();
         long start = System.nanoTime();
         // progress names areas from the user's data: it goes through the command's terminal-safe stream
         PrintWriter err = spec.commandLine().getErr();
-        List<DistrictBatch.Row> rows = DistrictBatch.run(new DistrictBatch.Request(roads, layer.readOptions(), areas,
-                PlaceLayerReader.read(areas, areaCrs, areaTable), depotField, margin, leaveOutCutOff, out, cores,
-                depots == null ? null : PlaceLayerReader.points(depots, "--depots")),
-                quiet ? line -> { } : line -> {
-                    err.println(line);
-                    err.flush();
-                });
+        List<DistrictBatch.Row> rows = DistrictBatch.run(request, quiet ? line -> { } : line -> {
+            err.println(line);
+            err.flush();
+        });
         PrintWriter stdout = spec.commandLine().getOut();
         long failed = rows.stream().filter(r -> !r.status().equals("planned")).count();
         double service = rows.stream().mapToDouble(DistrictBatch.Row::serviceKm).sum();
         stdout.printf(Locale.ROOT, "Areas     %d planned, %d failed (listed in %s)%n", rows.size() - failed, failed,
                 out.resolve("summary.csv"));
         stdout.printf(Locale.ROOT, "Service   %.3f km in all areas%n", service);
-        stdout.printf(Locale.ROOT, "Time      %.2f s on %d threads%n", (System.nanoTime() - start) / 1e9, cores);
+        stdout.printf(Locale.ROOT, "Time      %.2f s on %d threads%n", (System.nanoTime() - start) / 1e9, request.threads());
         stdout.println("Caution   Plans are advice: obey traffic law and signs, never handle a device while driving, "
                 + "follow local rules and your own risk assessment; map data may be out of date.");
         stdout.flush();
