@@ -10,8 +10,9 @@ import org.streetcomb.read.Travel;
 
 /**
  * The mixed postman problem (one-way and two-way streets together; NP-hard, Papadimitriou 1976), also in
- * its rural form, by Frederickson's MIXED2 scheme (J. ACM 26, 1979) followed by exact re-optimisation and
- * a local search:
+ * its rural form, by Frederickson's MIXED2 scheme (J. ACM 26, 1979) and his MIXED1 (the same steps after
+ * EVENDEGREE, a minimum-cost pairing of the underlying undirected graph's odd nodes, its copies put on two-way
+ * streets only), each followed by exact re-optimisation, keeping the shorter, and a local search:
  * <ol>
  * <li>for a rural demand, join the groups of streets to service by drivable shortest paths
  *     ({@link ComponentConnector});</li>
@@ -61,6 +62,13 @@ public final class MixedPostman implements PostmanSolver {
     static final int LP_MAX_EDGES = 50_000;
 
     /**
+     * Larger networks skip MIXED1, as they skip the LP: on the generated grids of docs/benchmarks.md it gave the
+     * shorter tour at 10,000 streets (836.970 km against 839.214) but not at 30,000 or 100,000, where its
+     * pairing and flow added 3 s to a 17 s solve.
+     */
+    static final int MIXED1_MAX_EDGES = LP_MAX_EDGES;
+
+    /**
      * How far the LP's traversals must lean one way for the LP-guided orientation to follow it (a second
      * orientation at 0.5 was tried and gained nothing on the real instances of docs/quality.md).
      */
@@ -72,7 +80,7 @@ public final class MixedPostman implements PostmanSolver {
 
     @Override
     public String method() {
-        return "Frederickson 1979 MIXED2 and an LP-guided orientation with exact re-balancing and direction flips; "
+        return "Frederickson 1979 MIXED1 and MIXED2 and an LP-guided orientation with exact re-balancing and direction flips; "
                 + "lower bound from the LP relaxation with odd cuts (Nobert & Picard 1996)";
     }
 
@@ -128,6 +136,37 @@ public final class MixedPostman implements PostmanSolver {
                 start = "LP-guided";
             }
         }
+        // Frederickson's MIXED1: EVENDEGREE first (a minimum-cost pairing of the odd nodes of the underlying
+        // undirected multigraph, one-way restrictions ignored), then INOUTDEGREE, EVENPARITY and the trails;
+        // its service directions are re-balanced exactly like MIXED2's, and the shorter is kept; up to
+        // MIXED1_MAX_EDGES streets
+        if (m <= MIXED1_MAX_EDGES) {
+            int[] passes = new int[m];
+            for (int e = 0; e < m; e++) {
+                passes[e] = along[e] + against[e] + demand.either()[e];
+            }
+            int[] evened = passes.clone();
+            UndirectedPostman.addMatching(problem, evened);
+            int[] either1 = demand.either().clone();
+            for (int e = 0; e < m; e++) {
+                // copies go on two-way streets only: a copy of a one-way street could lead where the flow cannot
+                // return from (streets left out as cut off), and INOUTDEGREE and EVENPARITY restore the rest
+                if (network.travel(e) == Travel.BOTH) {
+                    either1[e] += evened[e] - passes[e];
+                }
+            }
+            Oriented mixed1 = inOutDegree(problem, along, against, either1);
+            evenParity(network, mixed1);
+            orientAlongTrails(network, mixed1);
+            int[][] first = oriented(demand, along, against, mixed1, null, 0);
+            DirectedPostman.Balanced viaMixed1 = DirectedPostman.balanced(problem, first[0], first[1]);
+            if (viaMixed1.traversals().length(network) < best.traversals().length(network) - 1e-9) {
+                best = viaMixed1;
+                serviceAlong = first[0];
+                serviceAgainst = first[1];
+                start = "MIXED1";
+            }
+        }
         // direction flips, each priced exactly by a few shortest paths on the flow's residual network
         FlipPricing pricing = new FlipPricing(network, serviceAlong, serviceAgainst, best);
         int[] keptAlong = serviceAlong.clone();
@@ -171,7 +210,7 @@ public final class MixedPostman implements PostmanSolver {
             bound = lp.bound();
             boundMethod = lp.describe();
         }
-        String method = "mixed postman, heuristic (" + connection + "Frederickson's MIXED2 orientation, "
+        String method = "mixed postman, heuristic (" + connection + "Frederickson's " + (m <= MIXED1_MAX_EDGES ? "MIXED1 and MIXED2 orientations, " : "MIXED2 orientation, ")
                 + "exact re-balancing by minimum-cost flow, " + start + " orientation kept, " + flips + " of " + tried + " direction flips kept; "
                 + "bound: " + boundMethod + ")";
         return new Augmentation(best.traversals(), total - service, UndirectedPostman.oddNodes(network).length, method,
