@@ -120,53 +120,19 @@ public final class MixedPostman implements PostmanSolver {
         orientAlongTrails(network, oriented);
         MixedLpBound.Result lp = m > LP_MAX_EDGES ? null : MixedLpBound.solve(problem, LP_LIMITS);
         // service directions now fixed: the connecting passes and the flow are re-solved together, for
-        // MIXED2's orientation and for the LP's where it leans one way by more than each of LEANS (MIXED2's
-        // elsewhere), keeping the shortest
-        int[] serviceAlong = oriented(demand, along, against, oriented, null, 0)[0];
-        int[] serviceAgainst = oriented(demand, along, against, oriented, null, 0)[1];
-        DirectedPostman.Balanced best = DirectedPostman.balanced(problem, serviceAlong, serviceAgainst);
-        String start = "MIXED2";
+        // MIXED2's orientation, for the LP's where it leans one way by more than each of LEANS (MIXED2's
+        // elsewhere) and for MIXED1's (up to MIXED1_MAX_EDGES streets), keeping the shortest
+        Kept kept = new Kept(problem, oriented(demand, along, against, oriented, null, 0), "MIXED2");
         for (double lean : lp == null ? new double[0] : LEANS) {
-            int[][] guided = oriented(demand, along, against, oriented, lp, lean);
-            DirectedPostman.Balanced trial = DirectedPostman.balanced(problem, guided[0], guided[1]);
-            if (trial.traversals().length(network) < best.traversals().length(network) - 1e-9) {
-                best = trial;
-                serviceAlong = guided[0];
-                serviceAgainst = guided[1];
-                start = "LP-guided";
-            }
+            kept.offer(oriented(demand, along, against, oriented, lp, lean), "LP-guided");
         }
-        // Frederickson's MIXED1: EVENDEGREE first (a minimum-cost pairing of the odd nodes of the underlying
-        // undirected multigraph, one-way restrictions ignored), then INOUTDEGREE, EVENPARITY and the trails;
-        // its service directions are re-balanced exactly like MIXED2's, and the shorter is kept; up to
-        // MIXED1_MAX_EDGES streets
         if (m <= MIXED1_MAX_EDGES) {
-            int[] passes = new int[m];
-            for (int e = 0; e < m; e++) {
-                passes[e] = along[e] + against[e] + demand.either()[e];
-            }
-            int[] evened = passes.clone();
-            UndirectedPostman.addMatching(problem, evened);
-            int[] either1 = demand.either().clone();
-            for (int e = 0; e < m; e++) {
-                // copies go on two-way streets only: a copy of a one-way street could lead where the flow cannot
-                // return from (streets left out as cut off), and INOUTDEGREE and EVENPARITY restore the rest
-                if (network.travel(e) == Travel.BOTH) {
-                    either1[e] += evened[e] - passes[e];
-                }
-            }
-            Oriented mixed1 = inOutDegree(problem, along, against, either1);
-            evenParity(network, mixed1);
-            orientAlongTrails(network, mixed1);
-            int[][] first = oriented(demand, along, against, mixed1, null, 0);
-            DirectedPostman.Balanced viaMixed1 = DirectedPostman.balanced(problem, first[0], first[1]);
-            if (viaMixed1.traversals().length(network) < best.traversals().length(network) - 1e-9) {
-                best = viaMixed1;
-                serviceAlong = first[0];
-                serviceAgainst = first[1];
-                start = "MIXED1";
-            }
+            kept.offer(oriented(demand, along, against, mixed1(problem, along, against), null, 0), "MIXED1");
         }
+        DirectedPostman.Balanced best = kept.balanced;
+        int[] serviceAlong = kept.along;
+        int[] serviceAgainst = kept.against;
+        String start = kept.name;
         // direction flips, each priced exactly by a few shortest paths on the flow's residual network
         FlipPricing pricing = new FlipPricing(network, serviceAlong, serviceAgainst, best);
         int[] keptAlong = serviceAlong.clone();
@@ -215,6 +181,63 @@ public final class MixedPostman implements PostmanSolver {
                 + "bound: " + boundMethod + ")";
         return new Augmentation(best.traversals(), total - service, UndirectedPostman.oddNodes(network).length, method,
                 total <= bound + CERTIFIED * Math.max(1, total), bound);
+    }
+
+    /**
+     * Frederickson's MIXED1: EVENDEGREE first (a minimum-cost pairing of the odd nodes of the underlying
+     * undirected multigraph, one-way restrictions ignored), then INOUTDEGREE, EVENPARITY and the trails. The
+     * pairing's copies go on two-way streets only: a copy of a one-way street could lead where the flow cannot
+     * return from (streets left out as cut off), and INOUTDEGREE and EVENPARITY restore the rest.
+     */
+    private static Oriented mixed1(PostmanProblem problem, int[] along, int[] against) {
+        StreetNetwork network = problem.network();
+        ServiceDemand demand = problem.demand();
+        int m = network.edgeCount();
+        int[] passes = new int[m];
+        for (int e = 0; e < m; e++) {
+            passes[e] = along[e] + against[e] + demand.either()[e];
+        }
+        int[] evened = passes.clone();
+        UndirectedPostman.addMatching(problem, evened);
+        int[] either = demand.either().clone();
+        for (int e = 0; e < m; e++) {
+            if (network.travel(e) == Travel.BOTH) {
+                either[e] += evened[e] - passes[e];
+            }
+        }
+        Oriented mixed1 = inOutDegree(problem, along, against, either);
+        evenParity(network, mixed1);
+        orientAlongTrails(network, mixed1);
+        return mixed1;
+    }
+
+    /** The shortest exact re-balancing of the service orientations offered so far, and which one it was. */
+    private static final class Kept {
+        private final PostmanProblem problem;
+        DirectedPostman.Balanced balanced;
+        int[] along;
+        int[] against;
+        String name;
+
+        Kept(PostmanProblem problem, int[][] orientation, String name) {
+            this.problem = problem;
+            take(DirectedPostman.balanced(problem, orientation[0], orientation[1]), orientation, name);
+        }
+
+        /** Re-balances the service passes as {@code orientation} directs them and keeps the result if shorter. */
+        void offer(int[][] orientation, String offered) {
+            DirectedPostman.Balanced trial = DirectedPostman.balanced(problem, orientation[0], orientation[1]);
+            if (trial.traversals().length(problem.network()) < balanced.traversals().length(problem.network()) - 1e-9) {
+                take(trial, orientation, offered);
+            }
+        }
+
+        private void take(DirectedPostman.Balanced trial, int[][] orientation, String offered) {
+            balanced = trial;
+            along = orientation[0];
+            against = orientation[1];
+            name = offered;
+        }
     }
 
     /**
