@@ -78,15 +78,6 @@ final class FlipPricing {
         return deadhead;
     }
 
-    /** Deadhead along each edge, service passes not counted. */
-    int[] deadAlong() {
-        return deadAlong;
-    }
-
-    int[] deadAgainst() {
-        return deadAgainst;
-    }
-
     /**
      * Prices turning {@code k} service passes of {@code edge} that now run from {@code u} to its other end;
      * keeps the cheaper deadhead and returns true only where the flip shortens the tour.

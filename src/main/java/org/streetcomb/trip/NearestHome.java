@@ -6,7 +6,8 @@ package org.streetcomb.trip;
  * node, or from the node to its nearest home, so the splits, the local search and the memetic search price
  * a trip as leaving from and returning to whichever home suits it, the relaxation route-first methods for
  * arc routing with intermediate facilities cut against (Ghiani, Improta &amp; Laporte 2001). The vehicle's
- * drive between one trip's home and the next trip's is added when the trips are chained. O(homes) per query.
+ * drive between one trip's home and the next trip's is left out here; for one vehicle's day the search's result
+ * is priced and cut as a chain of homes by {@link ReloadChainSplit}. O(homes) per query.
  */
 final class NearestHome implements Distances {
 
