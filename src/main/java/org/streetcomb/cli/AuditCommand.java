@@ -103,9 +103,10 @@ public final class AuditCommand implements Callable<Integer> {
                     + "of a street node).")
     LonLat start;
 
-    @Option(names = "--gps-sigma", paramLabel = "METRES", defaultValue = "10",
-            description = "GPS position noise, one standard deviation (default: ${DEFAULT-VALUE} m).")
-    double sigma;
+    @Option(names = "--gps-sigma", paramLabel = "METRES|estimate", defaultValue = "estimate",
+            description = "GPS position noise, one standard deviation, in metres; or 'estimate': for each track segment, "
+                    + "from how far its fixes lie from a first match at 10 m (default: ${DEFAULT-VALUE}).")
+    String sigma;
 
     @Option(names = "--search-radius", paramLabel = "METRES", defaultValue = "50",
             description = "Streets farther than this from a fix are not considered for it (default: ${DEFAULT-VALUE} m).")
@@ -166,7 +167,9 @@ public final class AuditCommand implements Callable<Integer> {
         if (!(coveredAt > 0 && coveredAt <= 1)) {
             throw new CommandLine.ParameterException(spec.commandLine(), "--covered-at must be above 0 and at most 1");
         }
-        positive(sigma, "--gps-sigma");
+        boolean estimateSigma = sigma.trim().equalsIgnoreCase("estimate");
+        double sigmaMetres = estimateSigma ? MatchSettings.DEFAULT_SIGMA : number(sigma, "--gps-sigma");
+        positive(sigmaMetres, "--gps-sigma");
         positive(radius, "--search-radius");
         positive(beta, "--route-scale");
         positive(maxGap, "--max-gap");
@@ -188,7 +191,8 @@ public final class AuditCommand implements Callable<Integer> {
             throw new CommandLine.ParameterException(spec.commandLine(),
                     "--start cannot be combined with the trip options: every trip starts and ends at the depot");
         }
-        MatchSettings settings = new MatchSettings(sigma, radius, beta, maxGap, maxSpeed / 3.6, doubtOdds, driftWindow);
+        MatchSettings settings = new MatchSettings(sigmaMetres, radius, beta, maxGap, maxSpeed / 3.6, doubtOdds, driftWindow,
+                estimateSigma);
         StageClock clock = new StageClock(TerminalProgress.forCommandLine(quiet, spec.commandLine().getErr()));
         TrackLines seen = new TrackLines();
         PlanScope asked = scope();
@@ -266,6 +270,15 @@ public final class AuditCommand implements Callable<Integer> {
         mopUpPlan = planned.plan();
         PlanFiles.Written written = PlanFiles.write(mopUpPlan, field.files(mopUpOut, true, false), clock, "write mop-up");
         return MopUpSection.of(mopUpPlan, planned.planned(), field.section(mopUpPlan, written), mopUpOut);
+    }
+
+    private double number(String text, String option) {
+        try {
+            return Double.parseDouble(text.trim());
+        } catch (NumberFormatException e) {
+            throw new CommandLine.ParameterException(spec.commandLine(), option + " must be a number of metres or 'estimate', not '"
+                    + text + "'");
+        }
     }
 
     private void positive(double value, String option) {

@@ -85,6 +85,12 @@ final class AuditSummary {
         matching.put("doubt_odds", settings.doubtOdds());
         matching.put("drift_window_s", settings.driftWindow());
         matching.put("gps_sigma_m", settings.sigma());
+        matching.put("gps_sigma_estimated", settings.estimateSigma());
+        if (tally.sigmaSegments() > 0) {
+            matching.put("gps_sigma_estimated_segments", tally.sigmaSegments());
+            matching.put("gps_sigma_estimated_low_m", round1(tally.sigmaLow()));
+            matching.put("gps_sigma_estimated_high_m", round1(tally.sigmaHigh()));
+        }
         matching.put("search_radius_m", settings.radius());
         matching.put("route_scale_m", settings.beta());
         matching.put("max_gap_m", settings.maxGap());
@@ -141,8 +147,8 @@ final class AuditSummary {
                 + "%d speed spikes, %d splits at impossible speed", tally.thinned(), tally.backwards(), tally.spikes(),
                 tally.splits());
         s.line("Matching", "%d points on streets in %d stretch%s, %d off the network (> %.0f m), %d dropouts or jumps "
-                + "not bridged; sigma %.1f m, doubt odds %.0f, drift window %.0f s", tally.matched(), tally.chains(),
-                tally.chains() == 1 ? "" : "es", tally.offNetwork(), settings.radius(), tally.breaks(), settings.sigma(),
+                + "not bridged; sigma %s, doubt odds %.0f, drift window %.0f s", tally.matched(), tally.chains(),
+                tally.chains() == 1 ? "" : "es", tally.offNetwork(), settings.radius(), tally.breaks(), sigmaText(settings, tally),
                 settings.doubtOdds(), settings.driftWindow());
         s.line("Coverage", "%.3f km of %.3f km required driven (%.1f %%)%s", coverage.driven() / 1000,
                 coverage.needed() / 1000, 100 * share(coverage.driven(), coverage.needed()).doubleValue(),
@@ -243,5 +249,23 @@ final class AuditSummary {
 
     String toJson() {
         return SummaryFormat.json(json);
+    }
+
+    /** The noise the match used: the given sigma, or the range estimated over the track segments. */
+    private static String sigmaText(MatchSettings settings, MatchTally tally) {
+        if (!settings.estimateSigma()) {
+            return String.format(Locale.ROOT, "%.1f m", settings.sigma());
+        }
+        if (tally.sigmaSegments() == 0) {
+            return String.format(Locale.ROOT, "%.1f m (too few points to estimate it)", settings.sigma());
+        }
+        return tally.sigmaSegments() == 1
+                ? String.format(Locale.ROOT, "%.1f m estimated from the track", tally.sigmaLow())
+                : String.format(Locale.ROOT, "%.1f to %.1f m estimated over %d segments", tally.sigmaLow(), tally.sigmaHigh(),
+                        tally.sigmaSegments());
+    }
+
+    private static BigDecimal round1(double value) {
+        return BigDecimal.valueOf(value).setScale(1, RoundingMode.HALF_EVEN);
     }
 }

@@ -8,6 +8,8 @@ import org.streetcomb.match.StreetIndex;
 import org.streetcomb.match.TrackCleaner;
 import org.streetcomb.match.TurningPockets;
 
+import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.List;
 import org.streetcomb.network.LocalFrame;
 import org.streetcomb.network.StreetNetwork;
@@ -30,6 +32,16 @@ public final class TrackCoverage {
     private final StreetIndex index;
     private final double driftWindow;
     private final double sigma;
+    private final boolean sigmaFromTrack;
+    /** Newson &amp; Krumm's factor from a median absolute deviation to a Gaussian's standard deviation. */
+    static final double MAD_TO_SIGMA = 1.4826;
+    /** Fewer matched fixes than this give too loose an estimate of the noise: the configured sigma is kept. */
+    static final int MIN_FIXES_FOR_SIGMA = 30;
+    /**
+     * The smallest noise estimated, metres: a lane's offset from the centreline is about this much whatever
+     * the receiver (common practice: lanes are about 3 m wide).
+     */
+    static final double MIN_SIGMA = 3;
     /**
      * Drift estimates made in turn, each from the match of the fixes the previous one corrected: a first
      * match misled by the drift (along two parallel streets) biases the first estimate towards zero.
@@ -48,6 +60,7 @@ public final class TrackCoverage {
         this.index = new StreetIndex(network);
         this.driftWindow = settings.driftWindow();
         this.sigma = settings.sigma();
+        this.sigmaFromTrack = settings.estimateSigma();
         this.pockets = TurningPockets.of(network, index.frame(), POCKET_SIGMAS * settings.sigma());
         this.matcher = new HmmMapMatcher(network, index, settings, TurningPockets.nodes(network, pockets));
         this.driven = new DrivenIntervals(network);
@@ -56,13 +69,49 @@ public final class TrackCoverage {
     public void accept(TrackSegment segment) {
         TrackCleaner.Result cleaned = cleaner.clean(segment);
         tally.addCleaned(segment.size(), cleaned);
-        for (int[] run : cleaned.runs()) {
-            TrackSegment corrected = segment;
+        List<int[]> runs = cleaned.runs();
+        List<TrackSegment> corrected = new ArrayList<>();
+        for (int[] run : runs) {
+            TrackSegment c = segment;
             for (int pass = 0; driftWindow > 0 && pass < DRIFT_PASSES; pass++) {
-                corrected = withoutDrift(corrected, run);
+                c = withoutDrift(c, run);
             }
-            matcher.match(corrected, run, driven, tally);
+            corrected.add(c);
         }
+        double noise = sigmaFromTrack ? trackSigma(corrected, runs) : sigma;
+        for (int r = 0; r < runs.size(); r++) {
+            matcher.match(corrected.get(r), runs.get(r), noise, driven, tally);
+        }
+    }
+
+    /**
+     * The GPS noise of one track segment, estimated as Newson &amp; Krumm do (2009, section 4): 1.4826 times
+     * the median distance of the fixes from where a first match (at the configured sigma) puts them, a
+     * robust estimate of a Gaussian's standard deviation; the configured sigma where fewer than
+     * {@value #MIN_FIXES_FOR_SIGMA} fixes are matched, and never below {@value #MIN_SIGMA} m.
+     */
+    private double trackSigma(List<TrackSegment> segments, List<int[]> runs) {
+        double[] distance = new double[0];
+        int count = 0;
+        for (int r = 0; r < runs.size(); r++) {
+            double[][] residual = matcher.residuals(segments.get(r), runs.get(r), sigma);
+            for (int i : runs.get(r)) {
+                if (!Double.isNaN(residual[0][i])) {
+                    if (count == distance.length) {
+                        distance = Arrays.copyOf(distance, Math.max(64, 2 * count));
+                    }
+                    distance[count++] = Math.hypot(residual[0][i], residual[1][i]);
+                }
+            }
+        }
+        if (count < MIN_FIXES_FOR_SIGMA) {
+            return sigma;
+        }
+        Arrays.sort(distance, 0, count);
+        double median = count % 2 == 1 ? distance[count / 2] : (distance[count / 2 - 1] + distance[count / 2]) / 2;
+        double estimate = Math.max(MIN_SIGMA, MAD_TO_SIGMA * median);
+        tally.sigmaEstimated(estimate);
+        return estimate;
     }
 
     /** Counts so far. */
@@ -80,7 +129,7 @@ public final class TrackCoverage {
                 return segment;
             }
         }
-        double[][] residual = matcher.residuals(segment, TrackCleaner.sparser(segment, run, DRIFT_THIN_SIGMAS * sigma));
+        double[][] residual = matcher.residuals(segment, TrackCleaner.sparser(segment, run, DRIFT_THIN_SIGMAS * sigma), sigma);
         double[] lon = segment.lon().clone();
         double[] lat = segment.lat().clone();
         LocalFrame frame = index.frame();

@@ -2,7 +2,12 @@ package org.streetcomb.match;
 
 import java.util.ArrayList;
 import java.util.Arrays;
+import java.util.HashMap;
+import java.util.HashSet;
 import java.util.List;
+import java.util.Map;
+import java.util.Set;
+import org.jgrapht.alg.util.UnionFind;
 import org.streetcomb.network.DijkstraSearch;
 import org.streetcomb.network.Heading;
 import org.streetcomb.network.LocalFrame;
@@ -36,13 +41,17 @@ import org.streetcomb.read.Travel;
  * one direction is charged for its signed step, so the backward steps of noise cost little and steady
  * backward motion loses to the other direction. Turning back at a node where the street goes on costs
  * {@value #U_TURN} m more (an addition to the published model: noise makes such turns look cheap, crews
- * rarely make them, and without it a turning loop is read as a turn at its mouth), and in the middle of
+ * rarely make them, and without it a turning loop is read as a turn at its mouth; a route between two fixes
+ * that leaves by the first state's own street or arrives by the second's turns back there too, and is charged
+ * the same, or a lone noisy fix beside a side street reads as a drive into it and back), and in the middle of
  * an edge (at roadworks, say) {@value #MID_STREET_TURN} m more; such a turn is placed at the farther of
  * the two fixes' positions, so only the stretch the fixes show is credited, and is not considered where
  * the edge leads to a dead end or a turning pocket, where crews drive to the end. Routes are bounded by
  * the gap limit and, for timed fixes, by the speed limit; where no route is believable the match is
  * split and nothing is credited across the split, as Newson &amp; Krumm
- * break the chain where the HMM cannot continue.
+ * break the chain where the HMM cannot continue. The gap limit counts the metres driven in the open: a
+ * receiver gets no fix in a tunnel (common practice), so a route through one may be as much longer as the
+ * tunnel, and the metres the vehicle's pace covers in the gap are not charged there either.
  *
  * <p>What is credited: not only the most probable drive (Newson &amp; Krumm's Viterbi path) but every move
  * that lies on some drive at most {@link MatchSettings#doubtOdds} times less probable, found by a forward
@@ -66,7 +75,7 @@ public final class HmmMapMatcher {
     /** How a move went: on along one edge, turning back on one edge, or through the nodes. */
     private static final byte ON = 0, TURN = 1, VIA = 2;
     /** Extra route metres charged for turning back at a node where the street goes on. */
-    static final double U_TURN = 50;
+    static final double U_TURN = 35;
     /**
      * Extra route metres charged for turning back in the middle of an edge: more than at a node, where a
      * side street helps the turn, so fixes that stop short of a junction read as a turn at the junction.
@@ -93,10 +102,18 @@ public final class HmmMapMatcher {
     private final DijkstraSearch legalSearch;
     private final int[] entryStamp;
     private final boolean[] pocketNodes;
+    /** Edges that run underground, where a receiver gets no fix. */
+    private final boolean[] underground;
+    /** The longest run of connected tunnel edges, metres: how far a route may go beyond the gap limit. */
+    private final double tunnelReach;
     private final Moves scratch = new Moves(256);
     private int stamp;
     /** Recent speed of the vehicle, metres per second (0 until known): a smoothed mean over matched moves. */
     private double pace;
+    /** How far the vehicle may have driven between the two fixes being joined, before the gap limit, metres. */
+    private double gapReach;
+    /** GPS noise of the run being matched, metres (Newson &amp; Krumm's sigma_z). */
+    private double sigma;
 
     /**
      * @param pocketNodes nodes on a turning pocket ({@link TurningPockets}): a crew heading for one drives
@@ -111,6 +128,38 @@ public final class HmmMapMatcher {
         this.search = new DijkstraSearch(network);
         this.legalSearch = new DijkstraSearch(network, Heading.OUTBOUND);
         this.entryStamp = new int[network.nodeCount()];
+        this.underground = new boolean[network.edgeCount()];
+        for (int e = 0; e < network.edgeCount(); e++) {
+            underground[e] = network.feature(e).tunnel();
+        }
+        this.tunnelReach = longestTunnelRun(network, underground);
+    }
+
+    /**
+     * The total length of the largest connected set of tunnel edges: JGraphT's union-find over the tunnels'
+     * end nodes, O(tunnel edges) amortised.
+     */
+    private static double longestTunnelRun(StreetNetwork network, boolean[] underground) {
+        Set<Integer> ends = new HashSet<>();
+        for (int e = 0; e < underground.length; e++) {
+            if (underground[e]) {
+                ends.add(network.from(e));
+                ends.add(network.to(e));
+            }
+        }
+        UnionFind<Integer> runs = new UnionFind<>(ends);
+        for (int e = 0; e < underground.length; e++) {
+            if (underground[e]) {
+                runs.union(network.from(e), network.to(e));
+            }
+        }
+        Map<Integer, Double> length = new HashMap<>();
+        for (int e = 0; e < underground.length; e++) {
+            if (underground[e]) {
+                length.merge(runs.find(network.from(e)), network.length(e), Double::sum);
+            }
+        }
+        return length.values().stream().mapToDouble(Double::doubleValue).max().orElse(0);
     }
 
     /** The candidate states of one fix and the Viterbi scores over them. */
@@ -164,9 +213,11 @@ public final class HmmMapMatcher {
     /**
      * Matches one cleaned run of fixes and records the stretches driven.
      *
-     * @param run indices into the segment of the fixes to use, in order
+     * @param run   indices into the segment of the fixes to use, in order
+     * @param sigma the GPS noise of the run, metres: the settings' or one estimated from the track
      */
-    public void match(TrackSegment segment, int[] run, DrivenIntervals driven, MatchTally tally) {
+    public void match(TrackSegment segment, int[] run, double sigma, DrivenIntervals driven, MatchTally tally) {
+        this.sigma = sigma;
         chains(segment, run, tally, chain -> credit(chain, driven));
     }
 
@@ -174,7 +225,8 @@ public final class HmmMapMatcher {
      * The offset of each fix of the run from the street position the most probable drive puts it at
      * (fix minus matched point, metres east and north in the plane), NaN for fixes left unmatched.
      */
-    public double[][] residuals(TrackSegment segment, int[] run) {
+    public double[][] residuals(TrackSegment segment, int[] run, double sigma) {
+        this.sigma = sigma;
         double[][] residual = new double[2][segment.size()];
         Arrays.fill(residual[0], Double.NaN);
         Arrays.fill(residual[1], Double.NaN);
@@ -201,7 +253,7 @@ public final class HmmMapMatcher {
                 tally.offNetwork++;
                 continue;
             }
-            Layer layer = new Layer(network, i, x, y, segment.time()[i], hits, settings.sigma());
+            Layer layer = new Layer(network, i, x, y, segment.time()[i], hits, sigma);
             if (chain.isEmpty() || !advance(chain.get(chain.size() - 1), layer)) {
                 if (!chain.isEmpty()) {
                     tally.breaks++;
@@ -253,29 +305,30 @@ public final class HmmMapMatcher {
         double line = Math.hypot(next.x - previous.x, next.y - previous.y);
         double limit = limit(previous, next, line);
         double seconds = next.time - previous.time;
-        double reach = seconds > 0 && pace > 0 ? Math.min(limit, Math.max(line, pace * seconds)) : line;
+        gapReach = seconds > 0 && pace > 0 ? Math.max(line, pace * seconds) : line;
+        double reach = Math.min(limit, gapReach);
         Arrays.fill(next.score, Double.NEGATIVE_INFINITY);
         scratch.clear();
         stamp++;
         for (int j = 0; j < next.size; j++) {
             entryStamp[entry(next, j)] = stamp;
         }
-        double[] toEntry = new double[next.size];
-        double[] toEntryLegal = new double[next.size];
+        Routes any = new Routes(next.size);
+        Routes legal = new Routes(next.size);
         boolean[] done = new boolean[previous.size];
         for (int i = 0; i < previous.size; i++) {
             if (done[i] || previous.score[i] == Double.NEGATIVE_INFINITY) {
                 continue;
             }
             int exit = exit(previous, i);
-            routesFrom(search, exit, limit, next, toEntry);
-            routesFrom(legalSearch, exit, limit, next, toEntryLegal);
+            routesFrom(search, exit, limit, next, any);
+            routesFrom(legalSearch, exit, limit, next, legal);
             // every state leaving by the same node shares this search
             for (int k = i; k < previous.size; k++) {
                 if (!done[k] && exit(previous, k) == exit && previous.score[k] != Double.NEGATIVE_INFINITY) {
                     done[k] = true;
                     for (int j = 0; j < next.size; j++) {
-                        score(previous, k, next, j, line, reach, limit, toEntry[j], toEntryLegal[j]);
+                        score(previous, k, next, j, line, reach, limit, any, legal);
                     }
                 }
             }
@@ -296,10 +349,10 @@ public final class HmmMapMatcher {
      * backward motion costs twice its length and loses to the opposite direction. Any other move follows
      * the route through the nodes.
      */
-    private void score(Layer a, int k, Layer b, int j, double line, double reach, double limit, double nodeDistance,
-                       double legalDistance) {
-        double viaCost = Math.min(viaCost(a, k, b, j, line, reach, limit, legalDistance),
-                viaCost(a, k, b, j, line, reach, limit, nodeDistance) + WRONG_WAY_ROUTE);
+    private void score(Layer a, int k, Layer b, int j, double line, double reach, double limit, Routes any,
+                       Routes legal) {
+        double viaCost = Math.min(viaCost(a, k, b, j, line, reach, limit, legal),
+                viaCost(a, k, b, j, line, reach, limit, any) + WRONG_WAY_ROUTE);
         double step = step(a, k, b, j);
         double onCost = Math.abs(step) <= limit ? deviation(step, line, reach) : Double.POSITIVE_INFINITY;
         double turn = a.edge[k] == b.edge[j] && a.along[k] != b.along[j] && goesOn(exit(a, k))
@@ -314,11 +367,39 @@ public final class HmmMapMatcher {
         b.score[j] = Math.max(b.score[j], score);
     }
 
-    /** The cost of the move from state k of a to state j of b through the nodes, {@code nodeDistance} apart. */
-    private double viaCost(Layer a, int k, Layer b, int j, double line, double reach, double limit, double nodeDistance) {
-        double via = network.length(a.edge[k]) - progress(a, k) + nodeDistance + progress(b, j);
-        return via <= limit
-                ? deviation(via, line, reach) + (uTurn(a, k, b, j, nodeDistance) ? U_TURN : 0) : Double.POSITIVE_INFINITY;
+    /** The cost of the move from state k of a to state j of b through the nodes, by the given routes. */
+    private double viaCost(Layer a, int k, Layer b, int j, double line, double reach, double limit, Routes routes) {
+        double nodeDistance = routes.distance[j];
+        double rest = network.length(a.edge[k]) - progress(a, k);
+        double via = rest + nodeDistance + progress(b, j);
+        // the gap limit counts the metres in the open: in a tunnel no fix is to be had
+        double open = (underground[a.edge[k]] ? 0 : rest) + routes.open[j] + (underground[b.edge[j]] ? 0 : progress(b, j));
+        if (open > limit) {
+            return Double.POSITIVE_INFINITY;
+        }
+        // a route that leaves by a's own edge, or arrives by b's, turns back at that end where the street goes on
+        boolean turnsBack = uTurn(a, k, b, j, nodeDistance)
+                || routes.first[j] == a.edge[k] && goesOn(exit(a, k))
+                || routes.last[j] == b.edge[j] && goesOn(entry(b, j));
+        // in a tunnel the vehicle drives on unseen: its metres there may take the route past the gap limit
+        double within = via > open ? Math.min(gapReach, limit + via - open) : reach;
+        return deviation(via, line, within) + (turnsBack ? U_TURN : 0);
+    }
+
+    /** Per state of the next fix: the route distance to its entry node, and the route's first and last edge (-1: none). */
+    private static final class Routes {
+        final double[] distance;
+        /** The route's metres outside tunnels. */
+        final double[] open;
+        final int[] first;
+        final int[] last;
+
+        Routes(int size) {
+            distance = new double[size];
+            open = new double[size];
+            first = new int[size];
+            last = new int[size];
+        }
     }
 
     /** Whether driving {@code edge} in the given direction obeys its one-way rule. */
@@ -362,25 +443,34 @@ public final class HmmMapMatcher {
     private double limit(Layer previous, Layer next, double line) {
         double seconds = next.time - previous.time;
         if (seconds > 0) {
-            return Math.min(settings.maxGap(), settings.maxSpeed() * seconds + TrackCleaner.NOISE_SIGMAS * settings.sigma());
+            return Math.min(settings.maxGap(), settings.maxSpeed() * seconds + TrackCleaner.NOISE_SIGMAS * sigma);
         }
-        return Double.isNaN(seconds) ? Math.max(settings.maxGap(), line + 2 * settings.sigma()) : settings.maxGap();
+        return Double.isNaN(seconds) ? Math.max(settings.maxGap(), line + 2 * sigma) : settings.maxGap();
     }
 
-    /** Distances from {@code exit} to the entry nodes of the next states, up to {@code limit}. */
-    private void routesFrom(DijkstraSearch search, int exit, double limit, Layer next, double[] toEntry) {
-        Arrays.fill(toEntry, Double.POSITIVE_INFINITY);
+    /** Routes from {@code exit} to the entry nodes of the next states, up to {@code limit}. */
+    private void routesFrom(DijkstraSearch search, int exit, double limit, Layer next, Routes routes) {
+        Arrays.fill(routes.distance, Double.POSITIVE_INFINITY);
         search.start(exit);
         int remaining = next.size;
         for (int v = search.next(); v >= 0 && remaining > 0; v = search.next()) {
             double d = search.distance(v);
-            if (d > limit) {
+            if (d > limit + tunnelReach) {
                 break;
             }
             if (entryStamp[v] == stamp) {
+                double open = d;
+                int first = -1;
+                for (int u = v; search.parentEdge(u) >= 0; u = network.other(search.parentEdge(u), u)) {
+                    first = search.parentEdge(u);
+                    open -= underground[first] ? network.length(first) : 0;
+                }
                 for (int j = 0; j < next.size; j++) {
                     if (entry(next, j) == v) {
-                        toEntry[j] = d;
+                        routes.distance[j] = d;
+                        routes.open[j] = open;
+                        routes.last[j] = search.parentEdge(v);
+                        routes.first[j] = first;
                         remaining--;
                     }
                 }

@@ -15,9 +15,11 @@ package org.streetcomb.match;
  *                  probable drive only, as Newson &amp; Krumm's Viterbi path)
  * @param driftWindow seconds over which the receiver's slowly varying error (drift) is estimated and taken
  *                  out before the final match (0: not taken out)
+ * @param estimateSigma whether each track segment's noise is estimated from a first match at {@code sigma}
+ *                  and used in its place (Newson &amp; Krumm's median rule; see {@code TrackCoverage})
  */
 public record MatchSettings(double sigma, double radius, double beta, double maxGap, double maxSpeed,
-                            double doubtOdds, double driftWindow) {
+                            double doubtOdds, double driftWindow, boolean estimateSigma) {
 
     public static final double DEFAULT_SIGMA = 10;
     public static final double DEFAULT_RADIUS = 50;
@@ -39,12 +41,22 @@ public record MatchSettings(double sigma, double radius, double beta, double max
      */
     public static final double DEFAULT_DRIFT_WINDOW = 0;
 
+    /**
+     * On: receivers differ (3 m for a good one under open sky, 10 m and more in street canyons), and an
+     * emission law as wide as the noise tells two streets 10 m apart best (docs/quality.md has the study).
+     */
+    public static final boolean DEFAULT_ESTIMATE_SIGMA = true;
+
     public MatchSettings withDoubtOdds(double odds) {
-        return new MatchSettings(sigma, radius, beta, maxGap, maxSpeed, odds, driftWindow);
+        return new MatchSettings(sigma, radius, beta, maxGap, maxSpeed, odds, driftWindow, estimateSigma);
     }
 
     public MatchSettings withDriftWindow(double seconds) {
-        return new MatchSettings(sigma, radius, beta, maxGap, maxSpeed, doubtOdds, seconds);
+        return new MatchSettings(sigma, radius, beta, maxGap, maxSpeed, doubtOdds, seconds, estimateSigma);
+    }
+
+    public MatchSettings withSigma(double metres, boolean fromTrack) {
+        return new MatchSettings(metres, radius, beta, maxGap, maxSpeed, doubtOdds, driftWindow, fromTrack);
     }
 
     /** The natural log of {@link #doubtOdds}: how much log-probability a believable drive may lose. */
@@ -54,7 +66,7 @@ public record MatchSettings(double sigma, double radius, double beta, double max
 
     public static MatchSettings defaults() {
         return new MatchSettings(DEFAULT_SIGMA, DEFAULT_RADIUS, DEFAULT_BETA, DEFAULT_MAX_GAP, DEFAULT_MAX_SPEED,
-                DEFAULT_DOUBT_ODDS, DEFAULT_DRIFT_WINDOW);
+                DEFAULT_DOUBT_ODDS, DEFAULT_DRIFT_WINDOW, DEFAULT_ESTIMATE_SIGMA);
     }
 
     public MatchSettings {

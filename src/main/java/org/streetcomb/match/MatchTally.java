@@ -11,6 +11,31 @@ public final class MatchTally {
     int matched;
     int breaks;
     int chains;
+    int sigmaSegments;
+    double sigmaLow = Double.POSITIVE_INFINITY;
+    double sigmaHigh;
+
+    /** Records the GPS noise estimated for one track segment, metres. */
+    public void sigmaEstimated(double metres) {
+        sigmaSegments++;
+        sigmaLow = Math.min(sigmaLow, metres);
+        sigmaHigh = Math.max(sigmaHigh, metres);
+    }
+
+    /** Track segments whose GPS noise was estimated from their own fixes. */
+    public int sigmaSegments() {
+        return sigmaSegments;
+    }
+
+    /** The lowest noise estimated for a segment, metres (infinite when none was). */
+    public double sigmaLow() {
+        return sigmaLow;
+    }
+
+    /** The highest noise estimated for a segment, metres (0 when none was). */
+    public double sigmaHigh() {
+        return sigmaHigh;
+    }
 
     /** Counts a segment of {@code fixes} fixes and what cleaning it removed or split. */
     public void addCleaned(int fixes, TrackCleaner.Result cleaned) {

@@ -27,4 +27,13 @@ public record RoadFeature(String id, String name, LineString line, Travel travel
     public boolean hasCost() {
         return !Double.isNaN(cost);
     }
+
+    /**
+     * Whether the line runs underground: tagged {@code tunnel} with any value but "no" (OpenStreetMap's tunnel
+     * key: yes, building_passage, culvert, ...; a layer with such a field works the same way).
+     */
+    public boolean tunnel() {
+        String value = properties.getOrDefault("tunnel", "no").trim();
+        return !value.isEmpty() && !value.equalsIgnoreCase("no") && !value.equals("0");
+    }
 }

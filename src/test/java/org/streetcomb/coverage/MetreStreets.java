@@ -23,9 +23,27 @@ final class MetreStreets {
     private MetreStreets() {
     }
 
+    /** A timed track through the metre points (east, north, seconds, east, north, seconds, ...). */
+    static org.streetcomb.read.TrackSegment track(double... xyt) {
+        int n = xyt.length / 3;
+        double[] lon = new double[n], lat = new double[n], time = new double[n];
+        for (int i = 0; i < n; i++) {
+            lon[i] = LON + xyt[3 * i] * M_LON;
+            lat[i] = LAT + xyt[3 * i + 1] * M_LAT;
+            time[i] = SimulatedDrive.START + xyt[3 * i + 2];
+        }
+        return new org.streetcomb.read.TrackSegment(java.nio.file.Path.of("simulated.gpx"), "invented", lon, lat, time);
+    }
+
     /** A two-way street through the metre points (east, north, east, north, ...). */
     static RoadFeature street(String id, double... xy) {
         return street(id, Travel.BOTH, xy);
+    }
+
+    /** A two-way street through the metre points, tagged as a tunnel (OpenStreetMap's tunnel=yes). */
+    static RoadFeature tunnel(String id, double... xy) {
+        RoadFeature open = street(id, xy);
+        return new RoadFeature(id, id, open.line(), Travel.BOTH, true, Map.of("tunnel", "yes"));
     }
 
     /** A street of the given travel through the metre points (east, north, east, north, ...). */
