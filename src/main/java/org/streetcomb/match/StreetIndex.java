@@ -8,14 +8,15 @@ import org.streetcomb.network.StreetNetwork;
 
 /**
  * Finds the streets near a GPS fix: for every edge with a point within the search radius, the nearest point
- * of the edge's polyline, its distance and its offset along the edge. The edges' segments sit in a JTS
+ * of each of the edge's passes near the fix (a local minimum of the distance along the polyline), its
+ * distance and its offset along the edge. The edges' segments sit in a JTS
  * {@link STRtree} in a {@link LocalFrame} around the network, so a query costs O(log S + k) for S segments
  * and k hits. Offsets are measured in the plane and scaled to the edge's geodesic length, so they add up
  * with {@link StreetNetwork#length}. Build once per network; queries are not thread-safe.
  */
 public final class StreetIndex {
 
-    /** The nearest points of the edges near a fix, in edge id order. */
+    /** The nearest points of the edges near a fix, in edge id order (an edge twice where it passes twice). */
     public record Hits(int count, int[] edge, double[] offset, double[] distance, double[] nearX, double[] nearY) {
     }
 
@@ -28,13 +29,15 @@ public final class StreetIndex {
     private final double[] along;
     private final int[] firstPoint;
     private final double[] scale;
-    private final double[] best;
-    private final double[] bestOffset;
-    private final double[] bestX;
-    private final double[] bestY;
-    private final int[] bestStamp;
-    private int stamp;
-    private int[] found = new int[16];
+    /** The segments found by the last query: packed start point, position on it (0-1), distance. */
+    private int[] segment = new int[64];
+    private double[] segmentT = new double[64];
+    private double[] segmentD = new double[64];
+    /**
+     * Two nearest points of one edge are separate passes when the line between them runs at least this many
+     * metres farther from the fix than either: less is the wobble of a digitised line.
+     */
+    static final double SEPARATE_PASSES = 2;
 
     public StreetIndex(StreetNetwork network) {
         this.network = network;
@@ -63,11 +66,6 @@ public final class StreetIndex {
             scale[e] = planar > 0 ? network.length(e) / planar : 0;
         }
         tree.build();
-        best = new double[m];
-        bestOffset = new double[m];
-        bestX = new double[m];
-        bestY = new double[m];
-        bestStamp = new int[m];
     }
 
     /** The plane the index works in. */
@@ -75,14 +73,16 @@ public final class StreetIndex {
         return frame;
     }
 
-    /** Edges with a point within {@code radius} metres of the plane point (px, py). */
+    /**
+     * The nearest point of each pass of an edge within {@code radius} metres of the plane point (px, py):
+     * one hit for most edges, one per leg where an edge bends back near itself (a hairpin, a loop), since
+     * a fix on one leg is not explained by the nearest point of the other.
+     */
     public Hits near(double px, double py, double radius) {
-        stamp++;
         int[] count = {0};
         Envelope box = new Envelope(px - radius, px + radius, py - radius, py + radius);
         tree.query(box, item -> {
             int p = (Integer) item;
-            int e = edgeOfPoint(p);
             double ax = x[p], ay = y[p], bx = x[p + 1], by = y[p + 1];
             double dx = bx - ax, dy = by - ay;
             double len2 = dx * dx + dy * dy;
@@ -91,35 +91,63 @@ public final class StreetIndex {
             if (d > radius) {
                 return;
             }
-            if (bestStamp[e] != stamp) {
-                bestStamp[e] = stamp;
-                best[e] = Double.POSITIVE_INFINITY;
-                if (count[0] == found.length) {
-                    found = Arrays.copyOf(found, 2 * found.length);
-                }
-                found[count[0]++] = e;
+            int n = count[0]++;
+            if (n == segment.length) {
+                segment = Arrays.copyOf(segment, 2 * n);
+                segmentT = Arrays.copyOf(segmentT, 2 * n);
+                segmentD = Arrays.copyOf(segmentD, 2 * n);
             }
-            if (d < best[e]) {
-                best[e] = d;
-                bestOffset[e] = (along[p] + t * (along[p + 1] - along[p])) * scale[e];
-                bestX[e] = ax + t * dx;
-                bestY[e] = ay + t * dy;
-            }
+            segment[n] = p;
+            segmentT[n] = t;
+            segmentD[n] = d;
         });
-        int k = count[0];
-        int[] edges = Arrays.copyOf(found, k);
-        Arrays.sort(edges);
-        double[] offsets = new double[k];
-        double[] distances = new double[k];
-        double[] nearX = new double[k];
-        double[] nearY = new double[k];
-        for (int i = 0; i < k; i++) {
-            offsets[i] = Math.min(bestOffset[edges[i]], network.length(edges[i]));
-            distances[i] = best[edges[i]];
-            nearX[i] = bestX[edges[i]];
-            nearY[i] = bestY[edges[i]];
+        int n = count[0];
+        // segments are packed edge after edge, so segment order is edge order, then order along the edge
+        long[] keys = new long[n];
+        for (int i = 0; i < n; i++) {
+            keys[i] = (long) segment[i] << 32 | i;
         }
-        return new Hits(k, edges, offsets, distances, nearX, nearY);
+        Arrays.sort(keys);
+        int[] order = new int[n];
+        for (int i = 0; i < n; i++) {
+            order[i] = (int) keys[i];
+        }
+        Hits hits = new Hits(0, new int[n], new double[n], new double[n], new double[n], new double[n]);
+        int k = 0;
+        int kept = -1;
+        double bump = 0;
+        for (int r = 0; r < n; r++) {
+            int i = order[r];
+            int p = segment[i];
+            int e = edgeOfPoint(p);
+            boolean joinsPrevious = r > 0 && segment[order[r - 1]] == p - 1 && edgeOfPoint(p - 1) == e;
+            boolean joinsNext = r + 1 < n && segment[order[r + 1]] == p + 1 && edgeOfPoint(p + 1) == e;
+            if (kept >= 0 && hits.edge()[kept] == e) {
+                bump = joinsPrevious ? Math.max(bump, segmentD[i]) : Double.POSITIVE_INFINITY;
+            }
+            boolean minimum = (!joinsPrevious || segmentD[order[r - 1]] > segmentD[i])
+                    && (!joinsNext || segmentD[order[r + 1]] >= segmentD[i]);
+            if (!minimum) {
+                continue;
+            }
+            double offset = Math.min((along[p] + segmentT[i] * (along[p + 1] - along[p])) * scale[e], network.length(e));
+            double nx = x[p] + segmentT[i] * (x[p + 1] - x[p]);
+            double ny = y[p] + segmentT[i] * (y[p + 1] - y[p]);
+            boolean newPass = kept < 0 || hits.edge()[kept] != e
+                    || bump >= Math.max(hits.distance()[kept], segmentD[i]) + SEPARATE_PASSES;
+            if (!newPass && segmentD[i] >= hits.distance()[kept]) {
+                continue;
+            }
+            int at = newPass ? k++ : kept;
+            hits.edge()[at] = e;
+            hits.offset()[at] = offset;
+            hits.distance()[at] = segmentD[i];
+            hits.nearX()[at] = nx;
+            hits.nearY()[at] = ny;
+            kept = at;
+            bump = segmentD[i];
+        }
+        return new Hits(k, hits.edge(), hits.offset(), hits.distance(), hits.nearX(), hits.nearY());
     }
 
     private int edgeOfPoint(int p) {
