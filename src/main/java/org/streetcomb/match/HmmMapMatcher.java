@@ -19,7 +19,8 @@ import org.streetcomb.read.Travel;
  * Hidden-Markov map matching after P. Newson and J. Krumm, "Hear and There: Hidden Markov map matching
  * through noise and sparseness", ACM SIGSPATIAL GIS 2009, pp. 336-343.
  *
- * <p>The hidden states of a fix are the nearest points of the edges within the search radius, each taken
+ * <p>The hidden states of a fix are the nearest points of the edges within the search radius (one per pass of an
+ * edge near the fix, {@link StreetIndex}), each taken
  * in both directions of travel, so the matched path says which way every stretch was driven (one-way
  * streets and both-kerb rounds need that). Legal travel is the rule, not a ban: a state against a one-way
  * street loses {@value #WRONG_WAY} of log-probability per fix, and a route between fixes that drives a one-way
