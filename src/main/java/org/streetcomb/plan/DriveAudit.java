@@ -6,8 +6,10 @@ import org.streetcomb.match.MatchTally;
 
 import java.nio.file.Path;
 import java.util.ArrayList;
+import java.util.HashSet;
 import java.util.List;
 import java.util.Locale;
+import java.util.Set;
 import java.util.function.Consumer;
 import org.streetcomb.InputError;
 import org.streetcomb.network.Components;
@@ -21,6 +23,7 @@ import org.streetcomb.timing.StageClock;
 import org.streetcomb.read.GpxContents;
 import org.streetcomb.read.GpxTrackReader;
 import org.streetcomb.read.LayerReaders;
+import org.streetcomb.read.RoadFeature;
 import org.streetcomb.read.RoadLayer;
 import org.streetcomb.read.TrackSegment;
 
@@ -69,9 +72,32 @@ public final class DriveAudit {
             return results;
         });
         checkOverlap(request, files, network, extents, tally, warnings);
+        noteTunnels(network, scope, warnings);
         CoverageReport report = clock.time("account", () -> coverage.report(request.threshold(), request.bothKerbs(),
                 scope));
         return new Audit(request, layer.report(), List.copyOf(files), tally, report, List.copyOf(warnings));
+    }
+
+    /**
+     * A caution where required streets run in tunnels: a receiver gets no fix underground, so the audit
+     * credits a tunnel from the fixes at its ends (the shortest way between them) and cannot tell which
+     * branches of an underground junction were driven.
+     */
+    private static void noteTunnels(StreetNetwork network, boolean[] scope, List<String> warnings) {
+        Set<RoadFeature> tunnels = new HashSet<>();
+        double metres = 0;
+        for (int e = 0; e < network.edgeCount(); e++) {
+            if (network.required(e) && (scope == null || scope[e]) && network.feature(e).tunnel()) {
+                tunnels.add(network.feature(e));
+                metres += network.length(e);
+            }
+        }
+        if (!tunnels.isEmpty()) {
+            warnings.add(String.format(Locale.ROOT, "%d street line%s (%.3f km) run in tunnels, where a receiver gets no "
+                    + "fix: they are credited from the fixes at their ends, by the shortest way between them; check "
+                    + "tunnels that branch underground another way", tunnels.size(), tunnels.size() == 1 ? "" : "s",
+                    metres / 1000));
+        }
     }
 
     /**
