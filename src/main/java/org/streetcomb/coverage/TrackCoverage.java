@@ -17,7 +17,8 @@ import org.streetcomb.read.TrackSegment;
 
 /**
  * Accumulates the coverage of a network from track segments fed one at a time: each is cleaned
- * ({@link TrackCleaner}), matched ({@link HmmMapMatcher}) and its driven stretches recorded, then dropped,
+ * ({@link TrackCleaner}), matched ({@link HmmMapMatcher}; twice when its noise is estimated, see
+ * {@link #trackSigma}) and its driven stretches recorded, then dropped,
  * so any number of tracks can stream through. Turning pockets ({@link TurningPockets}) up to
  * {@value #POCKET_SIGMAS} sigma across that the matched path entered count as driven whole. Not thread-safe.
  */

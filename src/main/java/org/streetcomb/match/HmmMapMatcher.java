@@ -75,7 +75,10 @@ public final class HmmMapMatcher {
     private static final double ROUNDING = 1e-6;
     /** How a move went: on along one edge, turning back on one edge, or through the nodes. */
     private static final byte ON = 0, TURN = 1, VIA = 2;
-    /** Extra route metres charged for turning back at a node where the street goes on. */
+    /**
+     * Extra route metres charged for turning back at a node where the street goes on: 35 m, chosen with 50 and
+     * 25 m on the tuning seeds of the legal-drive study (docs/quality.md) once routes that double back pay it.
+     */
     static final double U_TURN = 35;
     /**
      * Extra route metres charged for turning back in the middle of an edge: more than at a node, where a
