@@ -92,15 +92,12 @@ public final class TrackCoverage {
      * {@value #MIN_FIXES_FOR_SIGMA} fixes are matched, and never below {@value #MIN_SIGMA} m.
      */
     private double trackSigma(List<TrackSegment> segments, List<int[]> runs) {
-        double[] distance = new double[0];
+        double[] distance = new double[runs.stream().mapToInt(run -> run.length).sum()];
         int count = 0;
         for (int r = 0; r < runs.size(); r++) {
             double[][] residual = matcher.residuals(segments.get(r), runs.get(r), sigma);
             for (int i : runs.get(r)) {
                 if (!Double.isNaN(residual[0][i])) {
-                    if (count == distance.length) {
-                        distance = Arrays.copyOf(distance, Math.max(64, 2 * count));
-                    }
                     distance[count++] = Math.hypot(residual[0][i], residual[1][i]);
                 }
             }

@@ -1,9 +1,11 @@
 package org.streetcomb.coverage;
 
+import java.nio.file.Path;
 import java.util.Map;
 import org.locationtech.jts.geom.Coordinate;
 import org.locationtech.jts.geom.GeometryFactory;
 import org.streetcomb.read.RoadFeature;
+import org.streetcomb.read.TrackSegment;
 import org.streetcomb.read.Travel;
 
 /**
@@ -24,7 +26,7 @@ final class MetreStreets {
     }
 
     /** A timed track through the metre points (east, north, seconds, east, north, seconds, ...). */
-    static org.streetcomb.read.TrackSegment track(double... xyt) {
+    static TrackSegment track(double... xyt) {
         int n = xyt.length / 3;
         double[] lon = new double[n], lat = new double[n], time = new double[n];
         for (int i = 0; i < n; i++) {
@@ -32,7 +34,7 @@ final class MetreStreets {
             lat[i] = LAT + xyt[3 * i + 1] * M_LAT;
             time[i] = SimulatedDrive.START + xyt[3 * i + 2];
         }
-        return new org.streetcomb.read.TrackSegment(java.nio.file.Path.of("simulated.gpx"), "invented", lon, lat, time);
+        return new TrackSegment(Path.of("simulated.gpx"), "invented", lon, lat, time);
     }
 
     /** A two-way street through the metre points (east, north, east, north, ...). */
