@@ -5,8 +5,8 @@ set -euo pipefail
 cd "$(dirname "$0")/.."
 mvn -q -B test-compile dependency:build-classpath -Dmdep.outputFile=target/bench.classpath >/dev/null
 cp="target/classes:target/test-classes:$(cat target/bench.classpath)"
-echo "| edges | odd nodes | read s | network s | solve s | order s | total s | peak heap MiB | JGraphT ChinesePostman time / ours |"
-echo "|---:|---:|---:|---:|---:|---:|---:|---:|---|"
+echo "| edges | odd nodes | read s | network s | solve s | order s | turns s | total s | peak heap MiB | JGraphT ChinesePostman time / ours |"
+echo "|---:|---:|---:|---:|---:|---:|---:|---:|---:|---|"
 for edges in ${@:-10000 100000 1000000}; do
   # JGraphT's ChinesePostman is cubic in the odd nodes: compare only where it can finish
   limit=$([ "$edges" -le 20000 ] && echo 300 || echo 0)

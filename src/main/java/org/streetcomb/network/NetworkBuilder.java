@@ -12,7 +12,6 @@ import org.locationtech.jts.geom.Coordinate;
 import org.locationtech.jts.geom.LineString;
 import org.locationtech.jts.noding.NodedSegmentString;
 import org.locationtech.jts.noding.SegmentString;
-import org.locationtech.jts.noding.snap.SnappingNoder;
 import org.streetcomb.InputError;
 import org.streetcomb.read.RoadFeature;
 import org.streetcomb.read.RoadLayer;
@@ -21,7 +20,7 @@ import org.streetcomb.read.RoadLayer;
  * Turns road lines into a planar {@link StreetNetwork}: every crossing and every touch becomes a node,
  * vertices and endpoints closer than the snap tolerance are joined, and zero-length pieces are dropped.
  *
- * <p>Noding is JTS's {@link SnappingNoder}, run in a {@link LocalFrame} so the tolerance is in metres.
+ * <p>Noding is JTS's snap noding with a hash-grid index ({@link SnapGrid}), run in a {@link LocalFrame} so the tolerance is in metres.
  * It snaps vertices to vertices and to segments within the tolerance and splits lines only at true
  * nodes, so output edges are as long as the arrangement allows. Each piece keeps the direction of its
  * source line and the index of its feature; its length is then measured on the ellipsoid
@@ -72,28 +71,13 @@ public final class NetworkBuilder {
             }
             input.add(new NodedSegmentString(projected, f));
         }
-        refuseExplosion(input, crossingLimit, source, frame);
-        SnappingNoder noder = new SnappingNoder(snapTolerance);
-        noder.computeNodes(input);
-        @SuppressWarnings("unchecked")
-        Collection<SegmentString> pieces = noder.getNodedSubstrings();
-        return assemble(pieces, frame, features);
-    }
-
-    /**
-     * Refuses, before noding, lines that cross each other mid-segment far more often than street layers do
-     * (damaged geometry: zig-zags, a line digitised over and over), whose noding would take minutes and
-     * gigabytes. The default limit, 20 crossings per segment plus 10,000, is far above real layers: their
-     * junctions are mostly shared vertices, and the shared layers cross under one time per segment.
-     */
-    private static void refuseExplosion(List<SegmentString> input, long crossingLimit, Object source, LocalFrame frame) {
-        if (crossingLimit == 0) {
-            return;
-        }
         long segments = input.stream().mapToLong(line -> line.size() - 1).sum();
-        long limit = crossingLimit > 0 ? crossingLimit : automaticCrossingLimit(segments);
-        CrossingCount.Result found = CrossingCount.upTo(input, limit);
+        long limit = crossingLimit == 0 ? Long.MAX_VALUE - 1
+                : crossingLimit > 0 ? crossingLimit : automaticCrossingLimit(segments);
+        SnapGrid.Noding noding = SnapGrid.node(input, snapTolerance, limit);
+        CrossingCount.Result found = noding.crossings();
         if (found.crossings() > limit) {
+            // damaged geometry: refused before its noding grows to millions of pieces
             throw InputError.at(source, null, String.format(Locale.ROOT, "its lines cross each other mid-segment more "
                     + "than %d times among %d segments (the first near %.5f,%.5f), so noding would split them into "
                     + "millions of pieces; damaged geometry (zig-zags, a line drawn over and over) is the usual cause: "
@@ -101,9 +85,15 @@ public final class NetworkBuilder {
                     + "--crossing-limit (0: no limit)", limit, segments, frame.lon(found.first().x),
                     frame.lat(found.first().y)));
         }
+        return assemble(noding.pieces(), frame, features);
     }
 
-    /** The default crossing limit for a layer of {@code segments} segments. */
+    /**
+     * The default crossing limit for a layer of {@code segments} segments: 20 crossings per segment plus 10,000,
+     * far above real layers (their junctions are mostly shared vertices, and the shared layers cross under one
+     * time per segment). Lines that cross more often are damaged geometry (zig-zags, a line digitised over and
+     * over), whose noding would take minutes and gigabytes; the noding stops when it passes the limit.
+     */
     static long automaticCrossingLimit(long segments) {
         return 20 * segments + 10_000;
     }

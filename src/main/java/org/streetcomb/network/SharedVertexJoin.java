@@ -7,8 +7,6 @@ import java.util.Objects;
 import java.util.stream.IntStream;
 import org.locationtech.jts.geom.Coordinate;
 import org.locationtech.jts.geom.LineString;
-import org.locationtech.jts.index.kdtree.KdNode;
-import org.locationtech.jts.index.kdtree.KdTree;
 import org.streetcomb.read.RoadFeature;
 
 /**
@@ -18,8 +16,8 @@ import org.streetcomb.read.RoadFeature;
  *
  * <p>With a level field (a z-level or OSM-style layer attribute), lines at different levels do not meet
  * at a shared interior vertex either; they still meet where either line ends, because a bridge or a
- * ramp joins the network at its ends. Vertices are clustered with JTS's {@link KdTree} with the snap
- * tolerance in a {@link LocalFrame}, in input order, so the result is deterministic. Each line is cut at
+ * ramp joins the network at its ends. Vertices are clustered within the snap
+ * tolerance ({@link SnapGrid}) in a {@link LocalFrame}, in input order, so the result is deterministic. Each line is cut at
  * its junction vertices; the pieces carry the cluster ids of their ends for {@link NetworkBuilder}.
  */
 final class SharedVertexJoin {
@@ -48,20 +46,15 @@ final class SharedVertexJoin {
 
     static Pieces split(List<RoadFeature> features, double snapMetres, String levelField) {
         LocalFrame frame = LocalFrame.covering(features);
-        KdTree tree = new KdTree(snapMetres);
+        SnapGrid grid = new SnapGrid(snapMetres);
         int[][] cluster = new int[features.size()][];
-        List<Coordinate> centres = new ArrayList<>();
         for (int f = 0; f < features.size(); f++) {
             LineString line = features.get(f).line();
             int[] ids = new int[line.getNumPoints()];
             int n = 0;
             for (int i = 0; i < ids.length; i++) {
                 Coordinate c = line.getCoordinateN(i);
-                KdNode node = tree.insert(new Coordinate(frame.x(c.x), frame.y(c.y)), centres.size());
-                int id = (Integer) node.getData();
-                if (id == centres.size()) {
-                    centres.add(node.getCoordinate());
-                }
+                int id = grid.snapId(new Coordinate(frame.x(c.x), frame.y(c.y)));
                 if (n == 0 || ids[n - 1] != id) { // vertices joined by the snap collapse into one
                     ids[n++] = id;
                 }
@@ -69,10 +62,10 @@ final class SharedVertexJoin {
             cluster[f] = Arrays.copyOf(ids, n);
         }
         // per cluster: how many line ends use it, and the one level of its interior uses (or a conflict)
-        int[] ends = new int[centres.size()];
-        int[] uses = new int[centres.size()];
-        String[] level = new String[centres.size()];
-        boolean[] mixed = new boolean[centres.size()];
+        int[] ends = new int[grid.size()];
+        int[] uses = new int[grid.size()];
+        String[] level = new String[grid.size()];
+        boolean[] mixed = new boolean[grid.size()];
         for (int f = 0; f < features.size(); f++) {
             String lv = levelField == null ? null : features.get(f).properties().getOrDefault(levelField, "");
             for (int i = 0; i < cluster[f].length; i++) {
@@ -97,7 +90,7 @@ final class SharedVertexJoin {
                 if (junction) {
                     double[] piece = new double[2 * (i - start + 1)];
                     for (int j = start; j <= i; j++) {
-                        Coordinate c = centres.get(ids[j]);
+                        Coordinate c = grid.point(ids[j]);
                         piece[2 * (j - start)] = frame.lon(c.x);
                         piece[2 * (j - start) + 1] = frame.lat(c.y);
                     }

@@ -1,12 +1,13 @@
 package org.streetcomb.tour;
 
+import java.util.ArrayList;
 import java.util.Arrays;
+import java.util.List;
 import java.util.PriorityQueue;
 import java.util.Set;
 import java.util.stream.Collectors;
 import java.util.stream.IntStream;
 import org.jgrapht.Graph;
-import org.jgrapht.alg.interfaces.MatchingAlgorithm;
 import org.jgrapht.alg.matching.KuhnMunkresMinimalWeightBipartitePerfectMatching;
 import org.jgrapht.graph.DefaultWeightedEdge;
 import org.jgrapht.graph.SimpleWeightedGraph;
@@ -21,8 +22,8 @@ import org.streetcomb.network.StreetNetwork;
  * plain Euler tour makes that choice blindly; here it is made by turn cost ({@link Turn#cost()}):
  * <ol>
  * <li><b>Assignment.</b> At each node the incoming and outgoing traversals are paired at least total turn
- * cost (Kuhn-Munkres on the node's small cost matrix, JGraphT). The pairing is the cheapest possible,
- * but it may fall apart into several closed circuits.</li>
+ * cost (every permutation where a node is passed up to four times, else Kuhn-Munkres, JGraphT). The
+ * pairing is the cheapest possible, but it may fall apart into several closed circuits.</li>
  * <li><b>Patching.</b> Two circuits that pass through a common node are joined by exchanging the
  * successors of one incoming traversal of each there, at the least added cost, cheapest exchange
  * first, until one circuit remains: the patching step of Karp's assignment-based method for the
@@ -42,7 +43,30 @@ import org.streetcomb.network.StreetNetwork;
  */
 public final class TurnAwareOrder {
 
+    /** Nodes passed at most this many times are paired by trying every permutation. */
+    private static final int SMALL = 4;
+    /** PERMUTATIONS[k]: every permutation of 0..k-1, identity first, for k up to {@link #SMALL}. */
+    private static final int[][][] PERMUTATIONS = IntStream.rangeClosed(0, SMALL)
+            .mapToObj(TurnAwareOrder::permutations).toArray(int[][][]::new);
+
     private TurnAwareOrder() {
+    }
+
+    private static int[][] permutations(int k) {
+        if (k == 0) {
+            return new int[][] {{}};
+        }
+        List<int[]> all = new ArrayList<>();
+        for (int[] shorter : permutations(k - 1)) { // k-1 inserted at every place, from the end
+            for (int at = k - 1; at >= 0; at--) {
+                int[] p = new int[k];
+                System.arraycopy(shorter, 0, p, 0, at);
+                p[at] = k - 1;
+                System.arraycopy(shorter, at, p, at + 1, k - 1 - at);
+                all.add(p);
+            }
+        }
+        return all.toArray(int[][]::new);
     }
 
     public static Tour of(StreetNetwork network, EdgeBearings bearings, TrafficSide side, Tour tour) {
@@ -89,8 +113,11 @@ public final class TurnAwareOrder {
                 exit[closing] = tour.start();
                 entry[closing] = end;
             }
-            this.nodes = IntStream.of(exit).distinct().sorted().toArray();
-            int[] index = new int[network.nodeCount()];
+            int[] index = new int[network.nodeCount()]; // node -> its place in nodes, plus one once seen
+            for (int node : exit) {
+                index[node] = 1;
+            }
+            this.nodes = IntStream.range(0, index.length).filter(node -> index[node] > 0).toArray();
             for (int i = 0; i < nodes.length; i++) {
                 index[nodes[i]] = i;
             }
@@ -141,28 +168,64 @@ public final class TurnAwareOrder {
                     successor[arriving[from]] = leaving[leavingStart[v]];
                     continue;
                 }
-                Graph<Integer, DefaultWeightedEdge> graph = new SimpleWeightedGraph<>(DefaultWeightedEdge.class);
-                for (int i = 0; i < 2 * k; i++) {
-                    graph.addVertex(i);
-                }
+                double[][] cost = new double[k][k];
                 for (int i = 0; i < k; i++) {
                     for (int j = 0; j < k; j++) {
-                        graph.setEdgeWeight(graph.addEdge(i, k + j), cost(arriving[from + i], leaving[leavingStart[v] + j]));
+                        cost[i][j] = cost(arriving[from + i], leaving[leavingStart[v] + j]);
                     }
                 }
-                Set<Integer> ins = IntStream.range(0, k).boxed().collect(Collectors.toSet());
-                Set<Integer> outs = IntStream.range(k, 2 * k).boxed().collect(Collectors.toSet());
-                MatchingAlgorithm.Matching<Integer, DefaultWeightedEdge> matching =
-                        new KuhnMunkresMinimalWeightBipartitePerfectMatching<>(graph, ins, outs).getMatching();
-                for (DefaultWeightedEdge edge : matching.getEdges()) {
-                    int a = graph.getEdgeSource(edge);
-                    int b = graph.getEdgeTarget(edge);
-                    int in = Math.min(a, b);
-                    int out = Math.max(a, b) - k;
-                    successor[arriving[from + in]] = leaving[leavingStart[v] + out];
+                int[] pairing = k <= SMALL ? cheapestPermutation(cost) : kuhnMunkres(cost);
+                for (int i = 0; i < k; i++) {
+                    successor[arriving[from + i]] = leaving[leavingStart[v] + pairing[i]];
                 }
             }
             return successor;
+        }
+
+        /**
+         * The least-cost pairing by trying every permutation: at most 4! = 24 for the few passes through a
+         * street junction, where building a graph for Kuhn-Munkres cost more than the whole search (on a
+         * million streets it made this stage longer than the solve).
+         */
+        private static int[] cheapestPermutation(double[][] cost) {
+            int k = cost.length;
+            int[] best = null;
+            double bestCost = Double.POSITIVE_INFINITY;
+            for (int[] p : PERMUTATIONS[k]) {
+                double c = 0;
+                for (int i = 0; i < k; i++) {
+                    c += cost[i][p[i]];
+                }
+                if (c < bestCost) {
+                    bestCost = c;
+                    best = p;
+                }
+            }
+            return best;
+        }
+
+        /** The least-cost pairing by Kuhn-Munkres (JGraphT), O(k^3), for nodes passed more than four times. */
+        private static int[] kuhnMunkres(double[][] cost) {
+            int k = cost.length;
+            Graph<Integer, DefaultWeightedEdge> graph = new SimpleWeightedGraph<>(DefaultWeightedEdge.class);
+            for (int i = 0; i < 2 * k; i++) {
+                graph.addVertex(i);
+            }
+            for (int i = 0; i < k; i++) {
+                for (int j = 0; j < k; j++) {
+                    graph.setEdgeWeight(graph.addEdge(i, k + j), cost[i][j]);
+                }
+            }
+            Set<Integer> ins = IntStream.range(0, k).boxed().collect(Collectors.toSet());
+            Set<Integer> outs = IntStream.range(k, 2 * k).boxed().collect(Collectors.toSet());
+            int[] pairing = new int[k];
+            for (DefaultWeightedEdge edge : new KuhnMunkresMinimalWeightBipartitePerfectMatching<>(graph, ins, outs)
+                    .getMatching().getEdges()) {
+                int a = graph.getEdgeSource(edge);
+                int b = graph.getEdgeTarget(edge);
+                pairing[Math.min(a, b)] = Math.max(a, b) - k;
+            }
+            return pairing;
         }
 
         /** An exchange of successors between two traversals arriving at the same node. */

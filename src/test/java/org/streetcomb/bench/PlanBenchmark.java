@@ -57,7 +57,7 @@ public final class PlanBenchmark {
         StringBuilder row = new StringBuilder(String.format(Locale.ROOT, "| %,d | %,d (%.2f) |", plan.network().edgeCount(),
                 plan.augmentation().oddNodes(), plan.augmentation().oddNodes() / (double) plan.network().nodeCount()));
         // the table's stage columns, by name (the pipeline times more stages than the table shows)
-        for (String name : new String[] {"read", "network", "solve", "order"}) {
+        for (String name : new String[] {"read", "network", "solve", "order", "turns"}) {
             double seconds = clock.stages().stream().filter(s -> s.name().equals(name))
                     .mapToDouble(StageClock.Stage::seconds).sum();
             row.append(String.format(Locale.ROOT, " %.2f |", seconds));
