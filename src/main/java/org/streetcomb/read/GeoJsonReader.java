@@ -1,6 +1,7 @@
 package org.streetcomb.read;
 
 import com.fasterxml.jackson.core.JsonFactory;
+import com.fasterxml.jackson.core.StreamReadFeature;
 import com.fasterxml.jackson.core.JsonParser;
 import com.fasterxml.jackson.core.JsonProcessingException;
 import com.fasterxml.jackson.core.JsonToken;
@@ -34,7 +35,9 @@ import org.streetcomb.InputError;
 public final class GeoJsonReader implements LayerReader {
 
     private static final GeometryFactory GEOMETRY = new GeometryFactory(new PrecisionModel(), 4326);
-    private static final ObjectMapper MAPPER = new ObjectMapper();
+    /** Jackson's fast double parser (correctly rounded, like Double.parseDouble): coordinates are most of a layer. */
+    private static final ObjectMapper MAPPER = new ObjectMapper(JsonFactory.builder()
+            .enable(StreamReadFeature.USE_FAST_DOUBLE_PARSER).build());
 
     private final AttributeMapping mapping;
 
@@ -50,7 +53,7 @@ public final class GeoJsonReader implements LayerReader {
     public RoadLayer read(Path file) {
         Collector collector = new Collector(file);
         try (InputStream in = Files.newInputStream(file);
-             JsonParser parser = new JsonFactory(MAPPER).createParser(in)) {
+             JsonParser parser = MAPPER.getFactory().createParser(in)) {
             readTopLevel(parser, collector);
         } catch (JsonProcessingException e) {
             var loc = e.getLocation();
