@@ -117,18 +117,14 @@ final class SnapGrid extends SnappingPointIndex {
             nextInCell = Arrays.copyOf(nextInCell, 2 * id);
         }
         int s = slot(cx, cy);
-        if (cellHead[s] < 0) {
-            cellX[s] = cx;
-            cellY[s] = cy;
-            if (2 * ++cells > cellHead.length) {
-                nextInCell[id] = -1;
-                cellHead[s] = id;
-                grow();
-                return id;
-            }
-        }
+        boolean newCell = cellHead[s] < 0;
+        cellX[s] = cx;
+        cellY[s] = cy;
         nextInCell[id] = cellHead[s];
         cellHead[s] = id;
+        if (newCell && 2 * ++cells > cellHead.length) {
+            grow();
+        }
         return id;
     }
 
